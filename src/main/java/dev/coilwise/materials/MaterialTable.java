@@ -1,0 +1,120 @@
+package dev.coilwise.materials;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import dev.coilwise.error.BadInputException;
+import dev.coilwise.error.InternalFaultException;
+import dev.coilwise.error.Message;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/** The set of materials the search may use, keyed by material key, in table order. Pass it in; never reach it statically. */
+public final class MaterialTable {
+    /** Classpath location of the bundled table. */
+    public static final String DEFAULT_RESOURCE = "/dev/coilwise/materials/materials.yaml";
+
+    private final Map<String, Material> byKey;
+    private final String sources;
+
+    public MaterialTable(List<Material> materials, String sources) {
+        Map<String, Material> m = new LinkedHashMap<>();
+        for (Material mat : materials) {
+            if (m.put(mat.key(), mat) != null) {
+                throw new BadInputException("material key '" + mat.key() + "' appears twice");
+            }
+        }
+        this.byKey = Map.copyOf(m);
+        this.order = List.copyOf(m.keySet());
+        this.sources = sources;
+    }
+
+    private final List<String> order;
+
+    /** Loads the table bundled with coilwise. */
+    public static MaterialTable loadDefault() {
+        try (InputStream in = MaterialTable.class.getResourceAsStream(DEFAULT_RESOURCE)) {
+            if (in == null) {
+                throw new InternalFaultException("material table resource missing: " + DEFAULT_RESOURCE);
+            }
+            byte[] bytes = in.readAllBytes();
+            return parse(new String(bytes, java.nio.charset.StandardCharsets.UTF_8));
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** Parses a table in the bundled format (see the header comment of materials.yaml for units). */
+    public static MaterialTable parse(String yaml) {
+        try {
+            JsonNode root = new ObjectMapper(new YAMLFactory()).readTree(yaml);
+            List<Material> list = new ArrayList<>();
+            for (JsonNode n : root.path("materials")) {
+                List<StrengthBand> bands = new ArrayList<>();
+                for (JsonNode b : n.path("strength")) {
+                    bands.add(new StrengthBand(b.path("d_min").asDouble() * 1e-3, b.path("d_max").asDouble() * 1e-3,
+                            b.path("m").asDouble(), b.path("A").asDouble()));
+                }
+                List<ModulusBand> moduli = new ArrayList<>();
+                for (JsonNode b : n.path("moduli")) {
+                    moduli.add(new ModulusBand(b.path("d_max").asDouble() * 1e-3, b.path("E").asDouble() * 1e9,
+                            b.path("G").asDouble() * 1e9));
+                }
+                list.add(new Material(n.path("key").asText(), n.path("name").asText(), n.path("standard").asText(),
+                        n.path("steel").asBoolean(), n.path("density").asDouble(), n.path("relative_cost").asDouble(),
+                        n.path("allowable_static").asDouble(), n.path("allowable_set_removed").asDouble(), bands, moduli,
+                        n.path("source").asText()));
+            }
+            return new MaterialTable(list, sourcesHeader(yaml));
+        } catch (IOException e) {
+            throw new InternalFaultException("material table is not valid YAML: " + e.getMessage(), e);
+        }
+    }
+
+    private static String sourcesHeader(String yaml) {
+        StringBuilder sb = new StringBuilder();
+        for (String line : yaml.split("\n")) {
+            if (!line.startsWith("#")) {
+                break;
+            }
+            sb.append(line.substring(1).strip()).append('\n');
+        }
+        return sb.toString();
+    }
+
+    public Material get(String key) {
+        Material m = byKey.get(key);
+        if (m == null) {
+            throw BadInputException.of(Message.UNKNOWN_MATERIAL, key, String.join(", ", order));
+        }
+        return m;
+    }
+
+    public boolean contains(String key) {
+        return byKey.containsKey(key);
+    }
+
+    /** All materials in table order. */
+    public List<Material> all() {
+        return order.stream().map(byKey::get).toList();
+    }
+
+    /** The steels in table order (the default search set). */
+    public List<Material> steels() {
+        return all().stream().filter(Material::steel).toList();
+    }
+
+    public List<String> keys() {
+        return order;
+    }
+
+    /** The table's header comment: the full citations behind the per-row source tags. */
+    public String sources() {
+        return sources;
+    }
+}
