@@ -38,6 +38,11 @@ public record Material(String key, String name, String standard, boolean steel, 
         }
     }
 
+    @Override
+    public String toString() {
+        return key;
+    }
+
     /** Smallest wire diameter the strength fit covers, m. */
     public double minDiameter() {
         return strength.get(0).minDiameter();
