@@ -1,0 +1,83 @@
+package dev.coilwise.report;
+
+import dev.coilwise.mechanics.Evaluation;
+import dev.coilwise.model.Spring;
+import dev.coilwise.search.ShortlistEntry;
+import dev.coilwise.search.SizingResult;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+/** Builds {@code shortlist.csv}: one row per design, purchasing fields first, SI with the unit in each header. */
+public final class ShortlistCsv {
+    private ShortlistCsv() {
+    }
+
+    public static String write(SizingResult r) {
+        boolean arrest = r.requirement().isArrest();
+        List<String> header = new ArrayList<>(List.of("rank", "source", "part_number", "supplier", "unit_price",
+                "material", "material_standard", "ends", "wire_diameter_mm", "outer_diameter_mm", "inner_diameter_mm",
+                "free_length_mm", "active_coils", "total_coils", "solid_length_mm", "rate_N_per_mm", "mass_g",
+                "preload_N"));
+        header.addAll(arrest
+                ? List.of("max_compression_mm", "peak_force_N", "peak_deceleration_gn", "stress_at_peak_MPa")
+                : List.of("cocked_compression_mm", "cocking_force_N", "exit_speed_m_per_s", "predicted_height_mm",
+                        "stress_at_cocked_MPa"));
+        header.addAll(List.of("allowable_stress_MPa", "stress_at_solid_MPa", "outer_diameter_at_solid_mm",
+                "binding_limit", "binding_margin_pct"));
+        StringWriter out = new StringWriter();
+        CSVFormat fmt = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").setCommentMarker('#').get();
+        try (CSVPrinter p = new CSVPrinter(out, fmt)) {
+            p.printComment(SafetyNotice.LINE);
+            p.printRecord(header);
+            for (ShortlistEntry e : r.shortlist()) {
+                p.printRecord(row(e, arrest));
+            }
+        } catch (IOException ex) {
+            throw new UncheckedIOException(ex);
+        }
+        return out.toString();
+    }
+
+    private static List<Object> row(ShortlistEntry entry, boolean arrest) {
+        Evaluation e = entry.evaluation();
+        Spring s = e.spring();
+        List<Object> row = new ArrayList<>(List.of(entry.rank(), "custom", "", "", "", s.material().key(),
+                s.material().standard(), s.ends().key()));
+        row.add(n(s.wireDiameter() * 1e3));
+        row.add(n(s.outerDiameter() * 1e3));
+        row.add(n(s.innerDiameter() * 1e3));
+        row.add(n(s.freeLength() * 1e3));
+        row.add(n(s.activeCoils()));
+        row.add(n(s.totalCoils()));
+        row.add(n(s.solidLength() * 1e3));
+        row.add(n(e.rate() * 1e-3));
+        row.add(n(e.mass() * 1e3));
+        row.add(n(e.preloadForce()));
+        row.add(n(e.workingDeflection() * 1e3));
+        row.add(n(e.peakForce()));
+        if (arrest) {
+            row.add(n(DisplayUnits.gn(e.peakDeceleration())));
+        } else {
+            row.add(n(e.speed()));
+            row.add(n(e.predictedHeight() * 1e3));
+        }
+        row.add(n(e.stressAtWorking() * 1e-6));
+        row.add(n(e.allowableStress() * 1e-6));
+        row.add(n(e.stressAtSolid() * 1e-6));
+        row.add(n(e.outerDiameterAtSolid() * 1e3));
+        row.add(e.binding().map(b -> b.key()).orElse(""));
+        row.add(e.binding().map(b -> n(b.value() * 100)).orElse(""));
+        return row;
+    }
+
+    private static String n(double v) {
+        BigDecimal b = Json.num(v);
+        return b == null ? "" : b.toPlainString();
+    }
+}

@@ -1,0 +1,223 @@
+package dev.coilwise.report;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.coilwise.mechanics.Evaluation;
+import dev.coilwise.mechanics.Margin;
+import dev.coilwise.model.Arrest;
+import dev.coilwise.model.Envelope;
+import dev.coilwise.model.Launch;
+import dev.coilwise.model.Limits;
+import dev.coilwise.model.Requirement;
+import dev.coilwise.model.Spring;
+import dev.coilwise.model.SpringOptions;
+import dev.coilwise.search.Diagnosis;
+import dev.coilwise.search.NearMiss;
+import dev.coilwise.search.SearchResult;
+import dev.coilwise.search.ShortlistEntry;
+import dev.coilwise.search.SizingResult;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+
+/** Builds {@code shortlist.json}: SI figures with the unit in each key (see docs/formats.md). */
+public final class ShortlistJson {
+    /** Format version of shortlist.json. */
+    public static final int FORMAT = 1;
+
+    private ShortlistJson() {
+    }
+
+    public static String write(SizingResult r) {
+        try {
+            return Json.MAPPER.writeValueAsString(tree(r)) + "\n";
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    public static ObjectNode tree(SizingResult r) {
+        ObjectNode root = Json.MAPPER.createObjectNode();
+        root.put("format", "coilwise-shortlist");
+        root.put("format_version", FORMAT);
+        root.put("caution", SafetyNotice.LINE);
+        root.set("requirement", requirement(r.requirement()));
+        root.set("search", search(r.search()));
+        ArrayNode designs = root.putArray("designs");
+        for (ShortlistEntry e : r.shortlist()) {
+            designs.add(design(e));
+        }
+        if (r.diagnosis().isPresent()) {
+            root.set("diagnosis", diagnosis(r.diagnosis().get(), r.requirement()));
+        }
+        ArrayNode w = root.putArray("warnings");
+        r.warnings().forEach(w::add);
+        return root;
+    }
+
+    static ObjectNode requirement(Requirement req) {
+        ObjectNode n = Json.MAPPER.createObjectNode();
+        n.put("title", req.title());
+        n.put("job", req.job().key());
+        n.put("units", req.units().name().toLowerCase(java.util.Locale.ROOT));
+        ObjectNode load = n.putObject("load");
+        Json.put(load, "mass_kg", req.job().mass());
+        if (req.job() instanceof Arrest a) {
+            ObjectNode m = n.putObject("motion");
+            Json.put(m, "contact_speed_m_per_s", a.contactSpeed());
+            Json.put(m, "drop_height_mm", a.dropHeight() * 1e3);
+            Json.put(m, "direction_deg_below_horizontal", Math.toDegrees(a.angle()));
+            Json.put(m, "drive_force_N", a.driveForce());
+        } else {
+            Launch l = (Launch) req.job();
+            ObjectNode m = n.putObject("launch");
+            Json.put(m, "height_mm", l.height() * 1e3);
+            Json.put(m, "direction_deg_above_horizontal", Math.toDegrees(l.angle()));
+            Json.put(m, "losses_pct", l.losses() * 100);
+            Json.put(m, "exit_speed_needed_m_per_s", l.requiredExitSpeed());
+        }
+        Limits lim = req.limits();
+        ObjectNode li = n.putObject("limits");
+        Json.put(li, "stroke_mm", lim.stroke() * 1e3);
+        Json.put(li, "peak_force_N", lim.peakForce().orElse(Double.NaN));
+        Json.put(li, "deceleration_gn", DisplayUnits.gn(lim.deceleration().orElse(Double.NaN)));
+        Envelope env = req.envelope();
+        ObjectNode en = n.putObject("envelope");
+        Json.put(en, "bore_mm", env.bore().orElse(Double.NaN) * 1e3);
+        Json.put(en, "rod_mm", env.rod().orElse(Double.NaN) * 1e3);
+        if (Double.isNaN(env.clearance().length())) {
+            Json.put(en, "clearance_pct", env.clearance().fraction() * 100);
+        } else {
+            Json.put(en, "clearance_mm", env.clearance().length() * 1e3);
+        }
+        Json.put(en, "max_free_length_mm", env.maxFreeLength().orElse(Double.NaN) * 1e3);
+        Json.put(en, "pocket_length_mm", env.pocketLength().orElse(Double.NaN) * 1e3);
+        SpringOptions o = req.spring();
+        ObjectNode sp = n.putObject("spring");
+        ArrayNode mats = sp.putArray("materials");
+        o.materials().forEach(mats::add);
+        ArrayNode ends = sp.putArray("ends");
+        o.ends().forEach(e -> ends.add(e.key()));
+        ArrayNode idx = sp.putArray("index");
+        idx.add(Json.num(o.indexMin())).add(Json.num(o.indexMax()));
+        ArrayNode coils = sp.putArray("active_coils");
+        coils.add(Json.num(o.coilsMin())).add(Json.num(o.coilsMax()));
+        Json.put(sp, "clash_allowance_pct", o.clashAllowance() * 100);
+        sp.put("solid_safe", o.solidSafe());
+        sp.put("set_removed", o.setRemoved());
+        sp.put("seating", o.seating().key());
+        sp.put("wire_series", req.wireSeries().name().toLowerCase(java.util.Locale.ROOT));
+        Json.put(sp, "cycles", o.cycles().orElse(Double.NaN));
+        sp.put("shot_peened", o.shotPeened());
+        sp.put("tolerance_grade", o.toleranceGrade());
+        ObjectNode rk = n.putObject("ranking");
+        rk.put("by", req.ranking().by().key());
+        rk.put("shortlist", req.ranking().shortlist());
+        return n;
+    }
+
+    static ObjectNode search(SearchResult s) {
+        ObjectNode n = Json.MAPPER.createObjectNode();
+        ArrayNode wires = n.putArray("wire_diameters_mm");
+        s.space().wireDiameters().forEach(d -> wires.add(Json.num(d * 1e3)));
+        ArrayNode mats = n.putArray("materials");
+        s.space().materials().forEach(m -> mats.add(m.key()));
+        ArrayNode ends = n.putArray("ends");
+        s.space().ends().forEach(e -> ends.add(e.key()));
+        n.put("families", s.space().families().size());
+        n.put("candidates_evaluated", s.evaluated());
+        n.put("feasible", s.feasibleSeen());
+        n.put("feasible_families", s.best().size());
+        return n;
+    }
+
+    static ObjectNode design(ShortlistEntry entry) {
+        Evaluation e = entry.evaluation();
+        Spring s = e.spring();
+        ObjectNode n = Json.MAPPER.createObjectNode();
+        n.put("rank", entry.rank());
+        n.put("source", "custom");
+        n.put("material", s.material().key());
+        n.put("material_standard", s.material().standard());
+        n.put("ends", s.ends().key());
+        Json.put(n, "wire_diameter_mm", s.wireDiameter() * 1e3);
+        Json.put(n, "mean_diameter_mm", s.meanDiameter() * 1e3);
+        Json.put(n, "outer_diameter_mm", s.outerDiameter() * 1e3);
+        Json.put(n, "inner_diameter_mm", s.innerDiameter() * 1e3);
+        Json.put(n, "index", s.index());
+        Json.put(n, "active_coils", s.activeCoils());
+        Json.put(n, "total_coils", s.totalCoils());
+        Json.put(n, "free_length_mm", s.freeLength() * 1e3);
+        Json.put(n, "solid_length_mm", s.solidLength() * 1e3);
+        Json.put(n, "pitch_mm", s.pitch() * 1e3);
+        Json.put(n, "rate_N_per_mm", e.rate() * 1e-3);
+        Json.put(n, "mass_g", e.mass() * 1e3);
+        Json.put(n, "relative_cost", e.cost());
+        Json.put(n, "tensile_strength_MPa", e.tensileStrength() * 1e-6);
+        Json.put(n, "allowable_stress_MPa", e.allowableStress() * 1e-6);
+        Json.put(n, "stress_at_solid_MPa", e.stressAtSolid() * 1e-6);
+        Json.put(n, "outer_diameter_at_solid_mm", e.outerDiameterAtSolid() * 1e3);
+        Json.put(n, "preload_N", e.preloadForce());
+        Json.put(n, "preload_deflection_mm", e.preloadDeflection() * 1e3);
+        if ("arrest".equals(e.job())) {
+            Json.put(n, "max_compression_mm", e.workingDeflection() * 1e3);
+            Json.put(n, "total_deflection_mm", e.totalDeflection() * 1e3);
+            Json.put(n, "peak_force_N", e.peakForce());
+            Json.put(n, "peak_deceleration_gn", DisplayUnits.gn(e.peakDeceleration()));
+            Json.put(n, "stress_at_peak_MPa", e.stressAtWorking() * 1e-6);
+            Json.put(n, "contact_speed_m_per_s", e.speed());
+        } else {
+            Json.put(n, "cocked_compression_mm", e.workingDeflection() * 1e3);
+            Json.put(n, "cocking_force_N", e.peakForce());
+            Json.put(n, "exit_speed_m_per_s", e.speed());
+            Json.put(n, "predicted_height_mm", e.predictedHeight() * 1e3);
+            Json.put(n, "stress_at_cocked_MPa", e.stressAtWorking() * 1e-6);
+        }
+        Json.put(n, "critical_deflection_mm", e.criticalDeflection() * 1e3);
+        Json.put(n, "natural_frequency_Hz", e.naturalFrequency());
+        Json.put(n, "surge_speed_limit_m_per_s", e.surgeSpeedLimit());
+        e.binding().ifPresent(b -> {
+            n.put("binding_limit", b.key());
+            Json.put(n, "binding_margin_pct", b.value() * 100);
+        });
+        n.set("margins", margins(e));
+        return n;
+    }
+
+    static ArrayNode margins(Evaluation e) {
+        ArrayNode arr = Json.MAPPER.createArrayNode();
+        for (Margin m : e.margins()) {
+            ObjectNode mn = arr.addObject();
+            mn.put("limit", m.key());
+            Json.put(mn, "margin_pct", m.value() * 100);
+            mn.put("hard", m.hard());
+            mn.put("holds", m.holds());
+            Json.put(mn, "actual", m.actual());
+            Json.put(mn, "allowed", m.allowed());
+            mn.put("unit", m.unit());
+        }
+        return arr;
+    }
+
+    static ObjectNode diagnosis(Diagnosis d, Requirement req) {
+        DisplayUnits u = new DisplayUnits(req.units());
+        ObjectNode n = Json.MAPPER.createObjectNode();
+        n.put("sampled", d.sampled());
+        ObjectNode rb = n.putObject("removed_by");
+        d.removedBy().forEach(rb::put);
+        ArrayNode near = n.putArray("nearest_misses");
+        for (NearMiss m : d.nearest()) {
+            ObjectNode o = near.addObject();
+            Spring s = m.evaluation().spring();
+            o.put("material", s.material().key());
+            o.put("ends", s.ends().key());
+            Json.put(o, "wire_diameter_mm", s.wireDiameter() * 1e3);
+            Json.put(o, "outer_diameter_mm", s.outerDiameter() * 1e3);
+            Json.put(o, "active_coils", s.activeCoils());
+            Json.put(o, "free_length_mm", s.freeLength() * 1e3);
+            o.put("fails", m.violated().key());
+            Json.put(o, "shortfall_pct", -m.violated().value() * 100);
+            o.put("would_pass_if", Relaxation.describe(m.violated(), req, u));
+        }
+        return n;
+    }
+}

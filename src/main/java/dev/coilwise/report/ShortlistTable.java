@@ -1,0 +1,131 @@
+package dev.coilwise.report;
+
+import dev.coilwise.mechanics.Evaluation;
+import dev.coilwise.model.Arrest;
+import dev.coilwise.model.Launch;
+import dev.coilwise.model.Requirement;
+import dev.coilwise.model.Spring;
+import dev.coilwise.search.NearMiss;
+import dev.coilwise.search.ShortlistEntry;
+import dev.coilwise.search.SizingResult;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/** The terminal view of a sizing: what was asked, the shortlist as an aligned table, notes and the caution. */
+public final class ShortlistTable {
+    private ShortlistTable() {
+    }
+
+    public static String write(SizingResult r, DisplayUnits u) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(summary(r.requirement(), u)).append('\n');
+        sb.append(DisplayUnits.fmt("searched %d families (%d materials, %d end types, %d wire sizes); %d candidates"
+                        + " evaluated; %d families have a feasible design%n",
+                r.search().space().families().size(), r.search().space().materials().size(),
+                r.search().space().ends().size(), r.search().space().wireDiameters().size(), r.search().evaluated(),
+                r.search().best().size()));
+        if (r.feasible()) {
+            sb.append('\n').append(table(r, u));
+        } else {
+            sb.append('\n').append("NO FEASIBLE DESIGN: no spring on the grid meets every limit.\n");
+            r.diagnosis().ifPresent(d -> {
+                sb.append("Limits that removed the sampled candidates (").append(d.sampled()).append(" sampled):\n");
+                for (Map.Entry<String, Long> en : d.removedBy().entrySet()) {
+                    sb.append(DisplayUnits.fmt("  %-16s %d%n", en.getKey(), en.getValue()));
+                }
+                if (!d.nearest().isEmpty()) {
+                    sb.append("Nearest misses (each fails one limit):\n");
+                    for (NearMiss m : d.nearest()) {
+                        Spring s = m.evaluation().spring();
+                        sb.append("  ").append(s.material().key()).append(' ').append(s.ends().key())
+                                .append(" d ").append(u.lenWithUnit(s.wireDiameter())).append(", OD ")
+                                .append(u.lenWithUnit(s.outerDiameter())).append(": ")
+                                .append(Relaxation.describe(m.violated(), r.requirement(), u)).append('\n');
+                    }
+                }
+            });
+        }
+        if (!r.warnings().isEmpty()) {
+            sb.append("\nNotes:\n");
+            r.warnings().forEach(w -> sb.append("  - ").append(w).append('\n'));
+        }
+        sb.append('\n').append(SafetyNotice.LINE).append('\n');
+        return sb.toString();
+    }
+
+    /** One paragraph restating the requirement in plain words. */
+    public static String summary(Requirement req, DisplayUnits u) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(req.title().isBlank() ? "(untitled requirement)" : req.title()).append('\n');
+        if (req.job() instanceof Arrest a) {
+            sb.append("Arrest ").append(DisplayUnits.sig(u.loadMass(a.mass()))).append(' ').append(u.loadMassUnit())
+                    .append(" meeting the spring at ").append(DisplayUnits.sig(u.speed(a.contactSpeed()))).append(' ')
+                    .append(u.speedUnit());
+            if (!Double.isNaN(a.dropHeight())) {
+                sb.append(" (a ").append(u.lenWithUnit(a.dropHeight())).append(" drop)");
+            }
+            sb.append(", moving ").append(DisplayUnits.fmt("%.0f", Math.toDegrees(a.angle())))
+                    .append(" deg below horizontal");
+            if (a.driveForce() > 0) {
+                sb.append(", pushed by ").append(u.forceWithUnit(a.driveForce()));
+            }
+            sb.append(", within ").append(u.lenWithUnit(req.limits().stroke())).append(" of stroke");
+        } else {
+            Launch l = (Launch) req.job();
+            sb.append("Launch ").append(DisplayUnits.sig(u.loadMass(l.mass()))).append(' ').append(u.loadMassUnit())
+                    .append(" to rise ").append(u.lenWithUnit(l.height())).append(" above the muzzle at ")
+                    .append(DisplayUnits.fmt("%.0f", Math.toDegrees(l.angle()))).append(" deg, losing ")
+                    .append(DisplayUnits.fmt("%.0f", l.losses() * 100)).append(" % of the stored energy, cocked within ")
+                    .append(u.lenWithUnit(req.limits().stroke()));
+        }
+        req.limits().peakForce().ifPresent(f -> sb.append("; force at most ").append(u.forceWithUnit(f)));
+        req.limits().deceleration().ifPresent(a -> sb.append("; deceleration at most ")
+                .append(DisplayUnits.sig(DisplayUnits.gn(a))).append(" gn"));
+        req.envelope().bore().ifPresent(b -> sb.append("; in a ").append(u.lenWithUnit(b)).append(" bore"));
+        req.envelope().rod().ifPresent(b -> sb.append("; over a ").append(u.lenWithUnit(b)).append(" rod"));
+        req.envelope().pocketLength().ifPresent(b -> sb.append("; installed in a ").append(u.lenWithUnit(b))
+                .append(" pocket"));
+        req.envelope().maxFreeLength().ifPresent(b -> sb.append("; free length at most ").append(u.lenWithUnit(b)));
+        sb.append(". Ranked by ").append(req.ranking().by().key().replace('_', ' ')).append('.');
+        return sb.toString();
+    }
+
+    static String table(SizingResult r, DisplayUnits u) {
+        boolean arrest = r.requirement().isArrest();
+        String l = u.lengthUnit();
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"#", "material", "ends", "d " + l, "OD " + l, "Na", "L0 " + l, "Ls " + l,
+            "rate " + u.rateUnit(), (arrest ? "x_max " : "x_cock ") + l, (arrest ? "F_peak " : "F_cock ") + u.forceUnit(),
+            arrest ? "decel gn" : "H " + l, "mass " + u.springMassUnit(), "binding limit"});
+        for (ShortlistEntry en : r.shortlist()) {
+            Evaluation e = en.evaluation();
+            Spring s = e.spring();
+            rows.add(new String[] {String.valueOf(en.rank()), s.material().key(), s.ends().key(),
+                u.us() ? DisplayUnits.fmt("%.4f", u.length(s.wireDiameter())) : DisplayUnits.fmt("%.2f", u.length(s.wireDiameter())),
+                u.len(s.outerDiameter()), DisplayUnits.fmt("%.2f", s.activeCoils()), u.len(s.freeLength()),
+                u.len(s.solidLength()), DisplayUnits.sig(u.rate(e.rate())), u.len(e.workingDeflection()),
+                DisplayUnits.sig(u.force(e.peakForce())),
+                arrest ? DisplayUnits.sig(DisplayUnits.gn(e.peakDeceleration())) : u.len(e.predictedHeight()),
+                DisplayUnits.sig(u.springMass(e.mass())),
+                e.binding().map(b -> b.key() + " " + DisplayUnits.fmt("%+.1f%%", b.value() * 100)).orElse("")});
+        }
+        int[] w = new int[rows.get(0).length];
+        for (String[] row : rows) {
+            for (int i = 0; i < row.length; i++) {
+                w[i] = Math.max(w[i], row[i].length());
+            }
+        }
+        StringBuilder sb = new StringBuilder();
+        for (String[] row : rows) {
+            StringBuilder line = new StringBuilder();
+            for (int i = 0; i < row.length; i++) {
+                boolean left = i == 1 || i == 2 || i == row.length - 1;
+                String cell = left ? String.format("%-" + w[i] + "s", row[i]) : String.format("%" + w[i] + "s", row[i]);
+                line.append(cell).append(i < row.length - 1 ? "  " : "");
+            }
+            sb.append(line.toString().stripTrailing()).append('\n');
+        }
+        return sb.toString();
+    }
+}
