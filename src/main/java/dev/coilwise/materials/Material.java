@@ -2,6 +2,7 @@ package dev.coilwise.materials;
 
 import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.Check;
+import dev.coilwise.error.InternalFaultException;
 import dev.coilwise.error.Message;
 import java.util.List;
 
@@ -53,8 +54,17 @@ public record Material(String key, String name, String standard, boolean steel, 
         return strength.get(strength.size() - 1).maxDiameter();
     }
 
+    /** Whether the strength fit covers wire diameter {@code d}, m. */
     public boolean covers(double d) {
         return strength.stream().anyMatch(b -> b.contains(d));
+    }
+
+    private void requireCovered(double d) {
+        Check.positive("wire diameter", d, "m");
+        if (!covers(d)) {
+            throw BadInputException.of(Message.WIRE_OUT_OF_MATERIAL_RANGE, d * 1e3, key, minDiameter() * 1e3,
+                    maxDiameter() * 1e3);
+        }
     }
 
     /**
@@ -63,22 +73,28 @@ public record Material(String key, String name, String standard, boolean steel, 
      * @throws BadInputException when {@code d} lies outside every band (no extrapolation)
      */
     public double tensileStrength(double d) {
-        Check.positive("wire diameter", d, "m");
+        requireCovered(d);
         for (StrengthBand b : strength) {
             if (b.contains(d)) {
                 return b.tensileStrength(d);
             }
         }
-        throw BadInputException.of(Message.WIRE_OUT_OF_MATERIAL_RANGE, d * 1e3, key, minDiameter() * 1e3, maxDiameter() * 1e3);
+        throw new InternalFaultException("material " + key + " covers " + d + " m but no strength band holds it");
     }
 
-    /** Static allowable torsional stress, Pa. */
+    /**
+     * Static allowable torsional stress, Pa: Sut times the fraction of Shigley's MED Table 10-6 before or after set
+     * removal. Compared with the Bergsträsser-corrected stress in both cases (the book pairs the set-removed fraction
+     * with the direct-shear factor K_S &lt; K_B, so this is on the safe side).
+     *
+     * @throws BadInputException when {@code d} lies outside the material's range
+     */
     public double allowableStress(double d, boolean setRemoved) {
         return tensileStrength(d) * (setRemoved ? allowableSetRemoved : allowableStatic);
     }
 
     private ModulusBand band(double d) {
-        Check.positive("wire diameter", d, "m");
+        requireCovered(d);
         for (ModulusBand b : moduli) {
             if (d <= b.maxDiameter() * (1 + 1e-9)) {
                 return b;
@@ -87,12 +103,20 @@ public record Material(String key, String name, String standard, boolean steel, 
         return moduli.get(moduli.size() - 1);
     }
 
-    /** Shear modulus G for wire diameter {@code d}, Pa. */
+    /**
+     * Shear modulus G for wire diameter {@code d}, Pa.
+     *
+     * @throws BadInputException when {@code d} lies outside the material's range (no extrapolation)
+     */
     public double shearModulus(double d) {
         return band(d).shearModulus();
     }
 
-    /** Young's modulus E for wire diameter {@code d}, Pa. */
+    /**
+     * Young's modulus E for wire diameter {@code d}, Pa.
+     *
+     * @throws BadInputException when {@code d} lies outside the material's range (no extrapolation)
+     */
     public double youngsModulus(double d) {
         return band(d).youngsModulus();
     }

@@ -8,9 +8,10 @@ public final class SolidGrowth {
     }
 
     /**
-     * Outer diameter at solid, OD_s = √(D² + (p² − d²)/π²) + d, m, p the free pitch of the active coils: the wire
-     * length per coil is conserved as the helix flattens (common practice; the relation appears in EN 13906-1 and in
-     * spring-maker handbooks, from memory).
+     * Outer diameter at solid, OD_s = √(D² + (p² − d²)/π²) + d, m, p the free pitch of the active coils. The wire
+     * length of one turn, √((πD)² + p²), is kept as the helix closes to pitch d with the number of turns unchanged
+     * (geometry; the same relation is given in the Spring Manufacturers Institute's Handbook of Spring Design, from
+     * memory). Friction at the seats, which can hold the end coils back, is neglected.
      */
     public static double outerDiameterAtSolid(Spring spring) {
         double d = spring.wireDiameter();

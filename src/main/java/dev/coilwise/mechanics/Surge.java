@@ -9,7 +9,7 @@ public final class Surge {
     }
 
     /**
-     * Lowest natural frequency with both ends fixed, f = ½√(k/m_a), Hz (Shigley's MED 9th ed., Eq. 10-25, from memory),
+     * Lowest natural frequency with both ends fixed, f = ½√(k/m_a), Hz (Shigley's MED 9th ed., Sec. 10-9, from memory),
      * m_a the mass of the active coils.
      */
     public static double frequencyFixedFixed(Spring spring) {
@@ -23,7 +23,9 @@ public final class Surge {
 
     /**
      * Shear stress of the surge wave when one end is struck or released at speed {@code v}: τ = v·√(2ρG), Pa
-     * (A. M. Wahl, Mechanical Springs, 2nd ed., ch. on spring surge, from memory).
+     * (A. M. Wahl, Mechanical Springs, 2nd ed., ch. on spring surge, from memory). It follows from the axial wave in
+     * the active coils: wave speed c = L·√(k/m_a), end force F = k·L·v/c = v·√(k·m_a), and 8FD/(πd³) with k and m_a
+     * written out. No curvature factor is applied, as in the source.
      */
     public static double waveStress(double speed, double density, double shearModulus) {
         Check.nonNegative("impact speed", speed, "m/s");
