@@ -9,13 +9,16 @@ import dev.coilwise.model.Spring;
 import dev.coilwise.model.SpringOptions;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Evaluates one spring against one requirement: the energy balance of the job, then every limit as a {@link Margin}.
  * Pure and thread-safe.
  *
  * <p>Margin keys: {@code stroke, peak_force, deceleration, coil_bind, stress_working, stress_solid, index,
- * active_coils, fit_bore, fit_rod, free_length, pocket, buckling, surge}. A design is feasible when every hard margin
+ * active_coils, fit_bore, fit_rod, free_length, pocket, buckling, surge, fatigue}. The fatigue margin (actual = the
+ * fatigue safety factor, required = {@code spring.fatigue_margin}) is added only when {@code spring.cycles} is at least
+ * {@link Fatigue#STATIC_BELOW}. A design is feasible when every hard margin
  * holds. Buckling is hard only when neither bore nor rod guides the spring; stress at solid is hard only when
  * {@code solid_safe}.
  */
@@ -91,9 +94,16 @@ public final class DesignEvaluator {
         double vLim = Surge.speedLimit(allow, s.material().density(), s.shearModulus());
         m.add(Margin.atMost("surge", speed, vLim, "m/s", true));
 
+        Optional<FatigueCheck> fatigue = Optional.empty();
+        if (opt.cycles().isPresent() && opt.cycles().getAsDouble() >= Fatigue.STATIC_BELOW) {
+            FatigueCheck f = Fatigue.check(s, k * preloadDefl, peak, opt.cycles().getAsDouble(), opt.shotPeened(), allow);
+            m.add(Margin.atLeast("fatigue", f.safetyFactor(), opt.fatigueMargin(), "", true));
+            fatigue = Optional.of(f);
+        }
+
         double mass = s.mass();
         return new Evaluation(s, req.job().key(), k, k * preloadDefl, preloadDefl, work, total, peak, decel, speed,
                 height, tauWork, tauSolid, sut, allow, odSolid, ycr, Surge.frequencyFixedFixed(s), vLim, mass,
-                mass * s.material().relativeCost(), m);
+                mass * s.material().relativeCost(), m, fatigue);
     }
 }

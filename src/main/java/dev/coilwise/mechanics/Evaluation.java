@@ -31,16 +31,19 @@ import java.util.Optional;
  * @param mass                whole spring mass, kg
  * @param cost                mass × relative wire cost (relative units, kg-equivalent of hard-drawn wire)
  * @param margins             every limit checked, hard and reported
+ * @param fatigue             the cycle-life check, present when the requirement asks for 10⁴ cycles or more
+ *                            (see {@link Fatigue})
  */
 public record Evaluation(Spring spring, String job, double rate, double preloadForce, double preloadDeflection,
                          double workingDeflection, double totalDeflection, double peakForce, double peakDeceleration,
                          double speed, double predictedHeight, double stressAtWorking, double stressAtSolid,
                          double tensileStrength, double allowableStress, double outerDiameterAtSolid,
                          double criticalDeflection, double naturalFrequency, double surgeSpeedLimit, double mass,
-                         double cost, List<Margin> margins) {
+                         double cost, List<Margin> margins, Optional<FatigueCheck> fatigue) {
 
     public Evaluation {
         margins = List.copyOf(margins);
+        fatigue = fatigue == null ? Optional.empty() : fatigue;
     }
 
     /** True when every hard margin holds. */
