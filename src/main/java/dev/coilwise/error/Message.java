@@ -49,10 +49,12 @@ public enum Message {
     ROD_NOT_BELOW_BORE("'%s' must be smaller than envelope.bore '%s': a spring cannot fit between them", 2),
     NO_ROOM_FOR_WIRE("after the clearance (%s) no wire fits between envelope.rod '%s' and envelope.bore '%s'", 3),
     TOO_LONG_FOR("'%s' must be shorter than %s '%s': %s", 4),
+    MUST_NOT_EXCEED("'%s' must not exceed %s '%s': %s", 4),
     MATERIAL_NOT_IN_TABLE("unknown material '%s'%s; known materials: %s", 3),
     LIST_EMPTY("must list at least one %s", 1),
     LOW_ABOVE_HIGH("the low end %s exceeds the high end %s", 2),
-    STOCK_NOT_FOUND("stock file not found: %s", 1);
+    STOCK_NOT_FOUND("file not found: %s", 1),
+    NO_ACTIVE_COILS("'%s' total coils leave no active coils with %s ends (%d inactive coils)", 3);
 
     private final String template;
     private final int arity;

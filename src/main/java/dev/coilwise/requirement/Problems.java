@@ -42,10 +42,12 @@ final class Problems {
         return List.copyOf(list);
     }
 
-    /** Throws every problem collected so far, if any. */
+    /** Throws every problem collected so far, if any, in file order (line, then column). */
     void throwIfAny() {
         if (!list.isEmpty()) {
-            throw new RequirementException(file, list);
+            List<InputProblem> sorted = new ArrayList<>(list);
+            sorted.sort(java.util.Comparator.comparingInt(InputProblem::line).thenComparingInt(InputProblem::column));
+            throw new RequirementException(file, sorted);
         }
     }
 

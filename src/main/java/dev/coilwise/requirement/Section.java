@@ -24,6 +24,7 @@ final class Section {
     private final Mapping map;
     private final Position where;
     private final Problems problems;
+    private final java.util.Map<String, Optional<Section>> children = new java.util.HashMap<>();
 
     Section(String path, Mapping map, Position where, Problems problems, List<String> allowed) {
         this.path = path;
@@ -87,8 +88,12 @@ final class Section {
         return e == null ? Optional.empty() : Optional.of(e.value());
     }
 
-    /** A nested section; a value that is not a mapping is reported. */
+    /** A nested section; a value that is not a mapping is reported. Asking again gives the same section, unreported. */
     Optional<Section> section(String name, List<String> allowed) {
+        return children.computeIfAbsent(name, k -> child(k, allowed));
+    }
+
+    private Optional<Section> child(String name, List<String> allowed) {
         return node(name).flatMap(n -> {
             if (n instanceof Mapping m) {
                 return Optional.of(new Section(key(name), m, keyAt(name), problems, allowed));
