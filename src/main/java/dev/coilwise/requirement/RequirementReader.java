@@ -1,0 +1,92 @@
+package dev.coilwise.requirement;
+
+import dev.coilwise.error.InternalFaultException;
+import dev.coilwise.materials.MaterialTable;
+import dev.coilwise.model.Envelope;
+import dev.coilwise.model.Job;
+import dev.coilwise.model.Limits;
+import dev.coilwise.model.Ranking;
+import dev.coilwise.model.Requirement;
+import dev.coilwise.model.SpringOptions;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Reads a requirement file (YAML, format in {@code docs/requirement-format.md}) into a validated {@link Requirement}
+ * in SI. Every problem of the file is collected, with its line and column, and thrown together in one
+ * {@link RequirementException}.
+ *
+ * <p>The unit system of the requirement is decided by majority: US when more of the file's lengths, forces, masses,
+ * speeds, rates and stresses are written in inch-pound units (in, ft, lb, lbf, psi, kpsi) than in metric units; SI
+ * otherwise, ties included. Angles, percentages and gn count for neither.
+ */
+public final class RequirementReader {
+    static final List<String> TOP_KEYS = List.of("title", "job", "load", "motion", "launch", "limits", "envelope", "spring",
+            "stock", "ranking");
+    static final String NEEDED = "job, load, limits and motion (arrest) or launch (launch)";
+
+    private final MaterialTable materials;
+
+    public RequirementReader(MaterialTable materials) {
+        this.materials = Objects.requireNonNull(materials, "materials");
+    }
+
+    /** Reads and validates a file; stock paths are resolved against the file's folder. */
+    public Requirement read(Path file) {
+        Problems problems = new Problems(file.toString());
+        Optional<String> text = FileText.read(file, problems);
+        problems.throwIfAny();
+        return parse(text.orElseThrow(), problems, FileText.folderOf(file), titleOf(file));
+    }
+
+    /**
+     * Parses requirement text.
+     *
+     * @param fileNameForMessages  the name problems are reported under
+     * @param baseDirForStockPaths the folder relative stock paths are resolved against (null: the working directory)
+     */
+    public Requirement parse(String yamlText, String fileNameForMessages, Path baseDirForStockPaths) {
+        Path base = baseDirForStockPaths == null ? Path.of("").toAbsolutePath() : baseDirForStockPaths;
+        return parse(yamlText, new Problems(fileNameForMessages), base, titleOf(Path.of(fileNameForMessages)));
+    }
+
+    private Requirement parse(String text, Problems problems, Path base, String defaultTitle) {
+        Optional<YamlNode.Mapping> root = YamlTreeReader.read(text, problems, NEEDED);
+        problems.throwIfAny();
+        Section top = new Section("", root.orElseThrow(), new YamlNode.Position(1, 1), problems, TOP_KEYS);
+        String title = top.has("title") ? top.text("title").orElse(defaultTitle) : defaultTitle;
+        Optional<String> job = top.has("job") ? top.choice("job", List.of(JobReader.ARREST, JobReader.LAUNCH)) : Optional.empty();
+        if (!top.has("job")) {
+            top.missing("job", "what the spring must do: arrest or launch");
+        }
+        Optional<Job> event = JobReader.read(top, job);
+        Optional<Limits> limits = LimitsReader.limits(top, job);
+        Optional<Envelope> envelope = LimitsReader.envelope(top, job);
+        if (limits.isPresent() && envelope.isPresent()) {
+            LimitsReader.crossCheck(top, limits.get(), envelope.get());
+        }
+        Optional<SpringOptions> spring = SpringOptionsReader.read(top, materials);
+        Optional<Ranking> ranking = RankingReader.read(top);
+        List<Path> stock = RankingReader.stock(top, base);
+        problems.throwIfAny();
+        Optional<Requirement> requirement = top.build("", () -> new Requirement(title, got(event, "job"),
+                got(limits, "limits"), got(envelope, "envelope"), got(spring, "spring"), got(ranking, "ranking"),
+                problems.unitSystem(), stock));
+        problems.throwIfAny();
+        return requirement.orElseThrow();
+    }
+
+    /** A part every problem-free file has; its absence without a reported problem is a reader bug. */
+    private static <T> T got(Optional<T> part, String name) {
+        return part.orElseThrow(() -> new InternalFaultException("requirement reader: no " + name + " and no problem reported"));
+    }
+
+    private static String titleOf(Path file) {
+        Path name = file.getFileName();
+        String n = name == null ? "" : name.toString();
+        int dot = n.lastIndexOf('.');
+        return dot > 0 ? n.substring(0, dot) : n;
+    }
+}
