@@ -29,7 +29,7 @@ public final class ShortlistCsv {
                 : List.of("cocked_compression_mm", "cocking_force_N", "exit_speed_m_per_s", "predicted_height_mm",
                         "stress_at_cocked_MPa"));
         header.addAll(List.of("allowable_stress_MPa", "stress_at_solid_MPa", "outer_diameter_at_solid_mm",
-                "binding_limit", "binding_margin_pct"));
+                "binding_limit", "binding_margin_pct", "fatigue_safety_factor", "probability_ok"));
         StringWriter out = new StringWriter();
         CSVFormat fmt = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").setCommentMarker('#').get();
         try (CSVPrinter p = new CSVPrinter(out, fmt)) {
@@ -73,6 +73,8 @@ public final class ShortlistCsv {
         row.add(n(e.outerDiameterAtSolid() * 1e3));
         row.add(e.binding().map(b -> b.key()).orElse(""));
         row.add(e.binding().map(b -> n(b.value() * 100)).orElse(""));
+        row.add(e.fatigue().map(f -> n(f.safetyFactor())).orElse(""));
+        row.add(entry.scatter().map(sc -> n(sc.probabilityOk())).orElse(""));
         return row;
     }
 

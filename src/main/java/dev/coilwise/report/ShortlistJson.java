@@ -107,11 +107,15 @@ public final class ShortlistJson {
         sp.put("seating", o.seating().key());
         sp.put("wire_series", req.wireSeries().name().toLowerCase(java.util.Locale.ROOT));
         Json.put(sp, "cycles", o.cycles().orElse(Double.NaN));
+        Json.put(sp, "fatigue_margin", o.fatigueMargin());
         sp.put("shot_peened", o.shotPeened());
         sp.put("tolerance_grade", o.toleranceGrade());
         ObjectNode rk = n.putObject("ranking");
         rk.put("by", req.ranking().by().key());
         rk.put("shortlist", req.ranking().shortlist());
+        rk.put("prefer", req.ranking().prefer().name().toLowerCase(java.util.Locale.ROOT));
+        rk.put("dynamics", req.ranking().dynamicsStrict() ? "strict" : "warn");
+        Json.put(rk, "min_probability", req.ranking().minProbability().orElse(Double.NaN));
         return n;
     }
 
@@ -178,6 +182,23 @@ public final class ShortlistJson {
         e.binding().ifPresent(b -> {
             n.put("binding_limit", b.key());
             Json.put(n, "binding_margin_pct", b.value() * 100);
+        });
+        e.fatigue().ifPresent(f -> {
+            ObjectNode fn = n.putObject("fatigue");
+            Json.put(fn, "safety_factor", f.safetyFactor());
+            fn.put("criterion", f.criterion());
+            Json.put(fn, "stress_amplitude_MPa", f.stressAmplitude() * 1e-6);
+            Json.put(fn, "stress_mean_MPa", f.stressMean() * 1e-6);
+        });
+        entry.scatter().ifPresent(sc -> {
+            ObjectNode sn = n.putObject("scatter");
+            sn.put("samples", sc.samples());
+            sn.put("seed", sc.seed());
+            Json.put(sn, "probability_ok", sc.probabilityOk());
+            ObjectNode p01 = sn.putObject("p01");
+            sc.p01().forEach((k, v) -> Json.put(p01, k, v));
+            ObjectNode p99 = sn.putObject("p99");
+            sc.p99().forEach((k, v) -> Json.put(p99, k, v));
         });
         n.set("margins", margins(e));
         return n;

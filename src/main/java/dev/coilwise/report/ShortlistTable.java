@@ -46,6 +46,10 @@ public final class ShortlistTable {
                 }
             });
         }
+        r.shortlist().stream().filter(en -> en.scatter().isPresent()).findFirst().ifPresent(en -> sb.append(
+                DisplayUnits.fmt("P ok: share of %d springs made to EN 15800 grade %d tolerances (seeded Monte Carlo)"
+                        + " that still meet every limit.%n", en.scatter().get().samples(),
+                        r.requirement().spring().toleranceGrade())));
         if (!r.warnings().isEmpty()) {
             sb.append("\nNotes:\n");
             r.warnings().forEach(w -> sb.append("  - ").append(w).append('\n'));
@@ -97,7 +101,7 @@ public final class ShortlistTable {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"#", "material", "ends", "d " + l, "OD " + l, "Na", "L0 " + l, "Ls " + l,
             "rate " + u.rateUnit(), (arrest ? "x_max " : "x_cock ") + l, (arrest ? "F_peak " : "F_cock ") + u.forceUnit(),
-            arrest ? "decel gn" : "H " + l, "mass " + u.springMassUnit(), "binding limit"});
+            arrest ? "decel gn" : "H " + l, "mass " + u.springMassUnit(), "P ok", "binding limit"});
         for (ShortlistEntry en : r.shortlist()) {
             Evaluation e = en.evaluation();
             Spring s = e.spring();
@@ -108,6 +112,7 @@ public final class ShortlistTable {
                 DisplayUnits.sig(u.force(e.peakForce())),
                 arrest ? DisplayUnits.sig(DisplayUnits.gn(e.peakDeceleration())) : u.len(e.predictedHeight()),
                 DisplayUnits.sig(u.springMass(e.mass())),
+                en.scatter().map(sc -> DisplayUnits.fmt("%.1f%%", sc.probabilityOk() * 100)).orElse("-"),
                 e.binding().map(b -> b.key() + " " + DisplayUnits.fmt("%+.1f%%", b.value() * 100)).orElse("")});
         }
         int[] w = new int[rows.get(0).length];
