@@ -21,7 +21,7 @@ public enum Message {
     NO_SEPARATION("the spring cannot throw the payload: stored energy %.4g J does not exceed the work against gravity over the stroke", 1),
 
     // Requirement and spring files (dev.coilwise.requirement). InputProblem adds the file, line, column and key.
-    PROBLEMS_IN_FILE("%d problem(s) in %s:%n%s", 3),
+    PROBLEMS_IN_FILE("%d problem(s) in %s:", 2),
     TOO_MANY_PROBLEMS("more than %d problems; the rest are not listed", 1),
     FILE_TOO_LARGE("the file has %d bytes; coilwise reads files of at most %d bytes (1 MiB)", 2),
     FILE_UNREADABLE("cannot read the file: %s", 1),
