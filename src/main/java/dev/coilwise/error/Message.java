@@ -23,7 +23,7 @@ public enum Message {
     // Requirement and spring files (dev.coilwise.requirement). InputProblem adds the file, line, column and key.
     PROBLEMS_IN_FILE("%d problem(s) in %s:", 2),
     TOO_MANY_PROBLEMS("more than %d problems; the rest are not listed", 1),
-    FILE_TOO_LARGE("the file has %d bytes; coilwise reads files of at most %d bytes (1 MiB)", 2),
+    FILE_TOO_LARGE("the file %s bytes; coilwise reads files of at most %d bytes (1 MiB)", 2),
     FILE_UNREADABLE("cannot read the file: %s", 1),
     YAML_SYNTAX("not valid YAML: %s", 1),
     YAML_EMPTY("the file is empty; give at least %s", 1),
@@ -40,7 +40,10 @@ public enum Message {
     NO_VALUE("has no value; give %s such as %s", 2),
     NO_UNIT("'%s' has no unit; give %s such as %s", 3),
     NOT_A_NUMBER("'%s' does not start with a number; give %s such as %s", 3),
-    NOT_A_FINITE_NUMBER("'%s' is not a finite number", 1),
+    NOT_A_FINITE_NUMBER("'%s' is not a finite number; give %s", 2),
+    TOO_LARGE("'%s' is more than %s, the largest %s coilwise accepts; check the number and its unit", 3),
+    TOO_SMALL("'%s' is less than %s, the smallest %s coilwise accepts; check the number and its unit", 3),
+    UNIT_NOT_LISTED("'%s' has a unit coilwise does not read, '%s'; %s units: %s", 4),
     UNKNOWN_UNIT("'%s' has an unknown unit '%s'%s; %s units: %s", 5),
     MUST_BE_POSITIVE("must be greater than zero, got '%s'", 1),
     MUST_NOT_BE_NEGATIVE("must not be negative, got '%s'", 1),
@@ -49,6 +52,7 @@ public enum Message {
     NOT_FOR_JOB("applies to job '%s' only; remove it for job '%s'%s", 3),
     DROP_NEEDS_FALL("a drop height means a fall straight down, but motion.direction is '%s'; give motion.speed, the speed at first contact, instead", 1),
     ROD_NOT_BELOW_BORE("'%s' must be smaller than envelope.bore '%s': a spring cannot fit between them", 2),
+    NO_ROOM_IN_BORE("after the clearance (%s) nothing fits in envelope.bore '%s': the diametral clearance must be smaller than the bore", 2),
     NO_ROOM_FOR_WIRE("after the clearance (%s) no wire fits between envelope.rod '%s' and envelope.bore '%s'", 3),
     TOO_LONG_FOR("'%s' must be shorter than %s '%s': %s", 4),
     MUST_NOT_EXCEED("'%s' must not exceed %s '%s': %s", 4),
@@ -56,6 +60,8 @@ public enum Message {
     LIST_EMPTY("must list at least one %s", 1),
     LOW_ABOVE_HIGH("the low end %s exceeds the high end %s", 2),
     STOCK_NOT_FOUND("file not found: %s", 1),
+    NOT_A_PATH("'%s' is not a file path this system can open", 1),
+    SPRING_TOO_HEAVY("the spring described would weigh %s kg; coilwise checks springs of at most %s kg: check the diameters, the coil count and their units", 2),
     NO_ACTIVE_COILS("'%s' total coils leave no active coils with %s ends (%d inactive coils)", 3);
 
     private final String template;

@@ -139,7 +139,7 @@ final class JobReader {
             return OptionalDouble.of(words.get(text));
         }
         if (!text.isEmpty() && Character.isLetter(text.charAt(0))) {
-            s.problem("direction", Message.NOT_A_CHOICE.format(text, Suggest.hint(text, words.keySet()), allowed));
+            s.problem("direction", Message.NOT_A_CHOICE.format(Shown.value(text), Suggest.hint(text, words.keySet()), allowed));
             return OptionalDouble.empty();
         }
         OptionalDouble a = s.quantityOf(node.get(), s.key("direction"), QuantityKind.ANGLE, Sign.ANY);
@@ -154,7 +154,7 @@ final class JobReader {
             return OptionalDouble.of(-Math.PI / 2);
         }
         if (v < low || v > Math.PI / 2) {
-            s.problem("direction", Message.NOT_IN_RANGE.format(lowText, "90 deg", text));
+            s.problem("direction", Message.NOT_IN_RANGE.format(lowText, "90 deg", Shown.value(text)));
             return OptionalDouble.empty();
         }
         return a;

@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Supplier;
+import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 
 /**
@@ -23,6 +24,13 @@ import java.util.stream.Collectors;
 final class Section {
     /** Sign rule for a quantity. */
     enum Sign { POSITIVE, NON_NEGATIVE, ANY }
+
+    /**
+     * A plain number as the reader accepts it: decimal, optional sign, fraction and exponent, '_' between digits
+     * allowed (YAML 1.1 style). The same text as {@code $defs/number} of the requirement schema.
+     */
+    static final Pattern PLAIN_NUMBER = Pattern.compile("[+-]?(?:[0-9][0-9_]*(?:\\.[0-9_]*)?|\\.[0-9][0-9_]*)(?:[eE][+-]?[0-9]+)?");
+    private static final Pattern NOT_FINITE = Pattern.compile("[+-]?\\.?(?:nan|inf|infinity)", Pattern.CASE_INSENSITIVE);
 
     private final String path;
     private final Mapping map;
@@ -37,8 +45,8 @@ final class Section {
         this.problems = problems;
         map.entries().forEach((k, e) -> {
             if (!allowed.contains(k)) {
-                problems.add(e.keyPosition(), key(k),
-                        Message.UNKNOWN_FIELD.format(k, Suggest.hint(k, allowed), String.join(", ", allowed)));
+                problems.add(e.keyPosition(), key(Shown.value(k)),
+                        Message.UNKNOWN_FIELD.format(Shown.value(k), Suggest.hint(k, allowed), String.join(", ", allowed)));
             }
         });
     }
@@ -76,7 +84,7 @@ final class Section {
     /** The text of a scalar value as written, for quoting in messages; empty string when absent. */
     String raw(String name) {
         YamlNode.Entry e = map.entries().get(name);
-        return e != null && e.value() instanceof Scalar s ? s.text() : "";
+        return e != null && e.value() instanceof Scalar s ? Shown.value(s.text()) : "";
     }
 
     void problem(String name, String message) {
@@ -146,13 +154,21 @@ final class Section {
         try {
             Quantities.Measured m = Quantities.measure(s.text(), kinds);
             problems.tally(m.system());
-            if (sign == Sign.POSITIVE && m.value() <= 0) {
-                problems.add(s.position(), key, Message.MUST_BE_POSITIVE.format(s.text()));
+            boolean negative = m.value() < 0 || m.value() == 0 && s.text().strip().startsWith("-");
+            if (sign == Sign.POSITIVE && (m.value() <= 0 || negative)) {
+                problems.add(s.position(), key, Message.MUST_BE_POSITIVE.format(Shown.value(s.text())));
                 return Optional.empty();
             }
-            if (sign == Sign.NON_NEGATIVE && m.value() < 0) {
-                problems.add(s.position(), key, Message.MUST_NOT_BE_NEGATIVE.format(s.text()));
+            if (sign == Sign.NON_NEGATIVE && negative) {
+                problems.add(s.position(), key, Message.MUST_NOT_BE_NEGATIVE.format(Shown.value(s.text())));
                 return Optional.empty();
+            }
+            if (m.kind().dimensional()) {
+                Optional<String> outOfBounds = Magnitudes.of(key).flatMap(b -> b.check(m.value(), s.text()));
+                if (outOfBounds.isPresent()) {
+                    problems.add(s.position(), key, outOfBounds.get());
+                    return Optional.empty();
+                }
             }
             return Optional.of(m);
         } catch (BadInputException e) {
@@ -181,7 +197,8 @@ final class Section {
         if (allowed.contains(v)) {
             return Optional.of(v);
         }
-        problems.add(s.position(), key, Message.NOT_A_CHOICE.format(v, Suggest.hint(v, allowed), String.join(", ", allowed)));
+        problems.add(s.position(), key, Message.NOT_A_CHOICE.format(Shown.value(v), Suggest.hint(v, allowed),
+                String.join(", ", allowed)));
         return Optional.empty();
     }
 
@@ -203,19 +220,22 @@ final class Section {
     }
 
     OptionalDouble numberOf(Scalar s, String key, double min, double max) {
-        double v;
-        try {
-            v = Double.parseDouble(s.text().strip().replace("_", ""));
-        } catch (NumberFormatException e) {
-            problems.add(s.position(), key, Message.EXPECTED.format("a plain number", s.describe()));
+        String text = s.text().strip();
+        if (!PLAIN_NUMBER.matcher(text).matches()) {
+            String what = NOT_FINITE.matcher(text).matches()
+                    ? Message.NOT_A_FINITE_NUMBER.format(Shown.value(text), "a number from " + plain(min) + " to " + plain(max))
+                    : Message.EXPECTED.format("a plain number from " + plain(min) + " to " + plain(max), s.describe());
+            problems.add(s.position(), key, what);
             return OptionalDouble.empty();
         }
+        double v = Double.parseDouble(text.replace("_", ""));
         if (!Double.isFinite(v)) {
-            problems.add(s.position(), key, Message.NOT_A_FINITE_NUMBER.format(s.text()));
+            problems.add(s.position(), key, Message.NOT_A_FINITE_NUMBER.format(Shown.value(text),
+                    "a number from " + plain(min) + " to " + plain(max)));
             return OptionalDouble.empty();
         }
         if (v < min || v > max) {
-            problems.add(s.position(), key, Message.NOT_IN_RANGE.format(plain(min), plain(max), s.text()));
+            problems.add(s.position(), key, Message.NOT_IN_RANGE.format(plain(min), plain(max), Shown.value(s.text())));
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(v);
@@ -228,7 +248,7 @@ final class Section {
             return Optional.empty();
         }
         if (v.getAsDouble() != Math.rint(v.getAsDouble())) {
-            problem(name, Message.EXPECTED.format("a whole number", "'" + raw(name) + "'"));
+            problem(name, Message.EXPECTED.format("a whole number from " + min + " to " + max, "'" + raw(name) + "'"));
             return Optional.empty();
         }
         return Optional.of((int) v.getAsDouble());

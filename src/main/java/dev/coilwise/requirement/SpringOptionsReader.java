@@ -78,7 +78,7 @@ final class SpringOptionsReader {
                             keys.add(k);
                         }
                     } else {
-                        s.problems().add(n.position(), s.key("materials"), Message.MATERIAL_NOT_IN_TABLE.format(k,
+                        s.problems().add(n.position(), s.key("materials"), Message.MATERIAL_NOT_IN_TABLE.format(Shown.value(k),
                                 Suggest.hint(k, table.keys()), String.join(", ", table.keys())));
                     }
                 });

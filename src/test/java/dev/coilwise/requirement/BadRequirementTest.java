@@ -49,9 +49,9 @@ class BadRequirementTest {
         return Stream.of(
             Arguments.of("bare-number", "7:11: limits.stroke: '45' has no unit; give a length such as '45 mm' or '1.8 in'"),
             Arguments.of("wrong-dimension", "7:11: limits.stroke: expected a length, got '45 N'"),
-            Arguments.of("unknown-unit", "8:15: limits.peak_force: '2 kgf' has an unknown unit 'kgf'; force units: N, kN, lbf"),
-            Arguments.of("not-a-number", "7:11: limits.stroke: 'NaN mm' is not a finite number"),
-            Arguments.of("infinite", "7:11: limits.stroke: '.inf' is not a finite number"),
+            Arguments.of("unknown-unit", "8:15: limits.peak_force: '2 kgf' has an unknown unit 'kgf'; force units: N, daN, kN, MN, lbf"),
+            Arguments.of("not-a-number", "7:11: limits.stroke: 'NaN mm' is not a finite number; give a length such as '45 mm' or '1.8 in'"),
+            Arguments.of("infinite", "7:11: limits.stroke: '.inf' is not a finite number; give a length such as '45 mm' or '1.8 in'"),
             Arguments.of("zero-mass", "3:9: load.mass: must be greater than zero, got '0 kg'"),
             Arguments.of("negative-drive-force", "6:16: motion.drive_force: must not be negative, got '-5 N'"),
             Arguments.of("rod-not-below-bore",
