@@ -134,11 +134,12 @@ final class JobReader {
         if (node.isEmpty()) {
             return OptionalDouble.empty();
         }
-        String text = node.get().text().strip();
+        String text = node.get().text();
         if (words.containsKey(text)) {
             return OptionalDouble.of(words.get(text));
         }
-        if (!text.isEmpty() && Character.isLetter(text.charAt(0))) {
+        String trimmed = Grammar.trim(text);
+        if (!trimmed.isEmpty() && Character.isLetter(trimmed.charAt(0))) {
             s.problem("direction", Message.NOT_A_CHOICE.format(Shown.value(text), Suggest.hint(text, words.keySet()), allowed));
             return OptionalDouble.empty();
         }

@@ -46,8 +46,6 @@ public final class Quantities {
 
     /** Unit symbols that mark a quantity as written in US customary units. */
     private static final Set<String> CUSTOMARY = Set.of("in", "ft", "lb", "lbf", "psi", "kpsi");
-    private static final Pattern NUMBER_THEN_UNIT =
-            Pattern.compile("([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*)", Pattern.DOTALL);
     private static final Pattern NOT_FINITE = Pattern.compile("[+-]?(?:nan|\\.nan|inf|\\.inf|infinity)\\b.*",
             Pattern.CASE_INSENSITIVE | Pattern.DOTALL);
     private static final SimpleUnitFormat FORMAT = unitFormat();
@@ -88,12 +86,12 @@ public final class Quantities {
     static Measured measure(String text, QuantityKind... kinds) {
         String what = Arrays.stream(kinds).map(QuantityKind::description).collect(Collectors.joining(" or "));
         String examples = Arrays.stream(kinds).map(QuantityKind::examples).collect(Collectors.joining(" or "));
-        String t = text == null ? "" : text.strip();
+        String t = text == null ? "" : Grammar.trim(text);
         String shown = Shown.value(t);
         if (t.isEmpty()) {
             throw BadInputException.of(Message.NO_VALUE, what, examples);
         }
-        Matcher m = NUMBER_THEN_UNIT.matcher(t);
+        Matcher m = Grammar.NUMBER_THEN_UNIT.matcher(t);
         if (!m.matches()) {
             if (NOT_FINITE.matcher(t).matches()) {
                 throw BadInputException.of(Message.NOT_A_FINITE_NUMBER, shown, what + " such as " + examples);
@@ -101,7 +99,7 @@ public final class Quantities {
             throw BadInputException.of(Message.NOT_A_NUMBER, shown, what, examples);
         }
         double number = Double.parseDouble(m.group(1));
-        String unitText = m.group(2).strip();
+        String unitText = m.group(2);
         if (unitText.isEmpty()) {
             throw BadInputException.of(Message.NO_UNIT, shown, what, examples);
         }

@@ -25,11 +25,6 @@ final class Section {
     /** Sign rule for a quantity. */
     enum Sign { POSITIVE, NON_NEGATIVE, ANY }
 
-    /**
-     * A plain number as the reader accepts it: decimal, optional sign, fraction and exponent, '_' between digits
-     * allowed (YAML 1.1 style). The same text as {@code $defs/number} of the requirement schema.
-     */
-    static final Pattern PLAIN_NUMBER = Pattern.compile("[+-]?(?:[0-9][0-9_]*(?:\\.[0-9_]*)?|\\.[0-9][0-9_]*)(?:[eE][+-]?[0-9]+)?");
     private static final Pattern NOT_FINITE = Pattern.compile("[+-]?\\.?(?:nan|inf|infinity)", Pattern.CASE_INSENSITIVE);
 
     private final String path;
@@ -154,7 +149,7 @@ final class Section {
         try {
             Quantities.Measured m = Quantities.measure(s.text(), kinds);
             problems.tally(m.system());
-            boolean negative = m.value() < 0 || m.value() == 0 && s.text().strip().startsWith("-");
+            boolean negative = m.value() < 0 || m.value() == 0 && Grammar.trim(s.text()).startsWith("-");
             if (sign == Sign.POSITIVE && (m.value() <= 0 || negative)) {
                 problems.add(s.position(), key, Message.MUST_BE_POSITIVE.format(Shown.value(s.text())));
                 return Optional.empty();
@@ -179,7 +174,7 @@ final class Section {
 
     /** A percentage within [min, max] (given as ratios, e.g. 0.95 for 95 %). */
     OptionalDouble fraction(String name, double min, double max) {
-        OptionalDouble f = quantity(name, QuantityKind.FRACTION, Sign.ANY);
+        OptionalDouble f = quantity(name, QuantityKind.FRACTION, Sign.NON_NEGATIVE);
         if (f.isPresent() && (f.getAsDouble() < min || f.getAsDouble() > max)) {
             problem(name, Message.NOT_IN_RANGE.format(plain(min * 100) + " %", plain(max * 100) + " %", raw(name)));
             return OptionalDouble.empty();
@@ -192,8 +187,9 @@ final class Section {
         return scalar(name, "one of " + String.join(", ", allowed)).flatMap(s -> choiceOf(s, key(name), allowed));
     }
 
+    /** One of a fixed set of words, written exactly (as the schema's enums require). */
     Optional<String> choiceOf(Scalar s, String key, List<String> allowed) {
-        String v = s.text().strip();
+        String v = s.text();
         if (allowed.contains(v)) {
             return Optional.of(v);
         }
@@ -220,8 +216,8 @@ final class Section {
     }
 
     OptionalDouble numberOf(Scalar s, String key, double min, double max) {
-        String text = s.text().strip();
-        if (!PLAIN_NUMBER.matcher(text).matches()) {
+        String text = Grammar.trim(s.text());
+        if (!Grammar.NUMBER.matcher(text).matches()) {
             String what = NOT_FINITE.matcher(text).matches()
                     ? Message.NOT_A_FINITE_NUMBER.format(Shown.value(text), "a number from " + plain(min) + " to " + plain(max))
                     : Message.EXPECTED.format("a plain number from " + plain(min) + " to " + plain(max), s.describe());

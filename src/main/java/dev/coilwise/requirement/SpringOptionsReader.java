@@ -72,7 +72,7 @@ final class SpringOptionsReader {
         List<String> keys = new ArrayList<>();
         s.items("materials", "a list of material keys such as [music-wire, chrome-silicon]").ifPresent(items -> {
             for (YamlNode n : items) {
-                s.scalarOf(n, s.key("materials"), "a material key").map(m -> m.text().strip()).ifPresent(k -> {
+                s.scalarOf(n, s.key("materials"), "a material key").map(YamlNode.Scalar::text).ifPresent(k -> {
                     if (table.contains(k)) {
                         if (!keys.contains(k)) {
                             keys.add(k);
