@@ -37,6 +37,7 @@ public enum Message {
     ONE_OF_TWO_MISSING("missing; give %s or %s", 2),
     BOTH_GIVEN("give %s or %s, not both", 2),
     EXPECTED("expected %s, got %s", 2),
+    UNDER_OTHER_KEY("'%s' is %s: give it as %s, or give %s", 4),
     NO_VALUE("has no value; give %s such as %s", 2),
     NO_UNIT("'%s' has no unit; give %s such as %s", 3),
     NOT_A_NUMBER("'%s' does not start with a number; give %s such as %s", 3),

@@ -30,10 +30,8 @@ final class FileText {
         try (InputStream in = Files.newInputStream(file)) {
             byte[] bytes = in.readNBytes(YamlTreeReader.MAX_BYTES + 1);
             if (bytes.length > YamlTreeReader.MAX_BYTES) {
-                long size = Files.isRegularFile(file) ? Files.size(file) : bytes.length;
-                problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format(
-                        size > YamlTreeReader.MAX_BYTES ? "has " + size : "has more than " + YamlTreeReader.MAX_BYTES,
-                        YamlTreeReader.MAX_BYTES));
+                String size = Files.isRegularFile(file) ? "has " + Files.size(file) : "has more than " + YamlTreeReader.MAX_BYTES;
+                problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format(size, YamlTreeReader.MAX_BYTES));
                 return Optional.empty();
             }
             Optional<String> wide = wideEncoding(bytes);

@@ -211,27 +211,43 @@ final class Section {
 
     /** A plain number (no unit) within [min, max]. */
     OptionalDouble number(String name, double min, double max) {
-        Optional<Scalar> s = scalar(name, "a number");
-        return s.isEmpty() ? OptionalDouble.empty() : numberOf(s.get(), key(name), min, max);
+        return number(name, min, max, false);
+    }
+
+    private OptionalDouble number(String name, double min, double max, boolean whole) {
+        Optional<Scalar> s = scalar(name, numberWords(min, max, whole));
+        return s.isEmpty() ? OptionalDouble.empty() : numberOf(s.get(), key(name), min, max, whole);
     }
 
     OptionalDouble numberOf(Scalar s, String key, double min, double max) {
+        return numberOf(s, key, min, max, false);
+    }
+
+    /** "a plain number from 1 to 1e10", "a whole number from 1 to 100". */
+    private static String numberWords(double min, double max, boolean whole) {
+        return (whole ? "a whole number" : "a plain number") + " from " + plain(min) + " to " + plain(max);
+    }
+
+    private OptionalDouble numberOf(Scalar s, String key, double min, double max, boolean whole) {
         String text = Grammar.trim(s.text());
+        String words = numberWords(min, max, whole);
         if (!Grammar.NUMBER.matcher(text).matches()) {
-            String what = NOT_FINITE.matcher(text).matches()
-                    ? Message.NOT_A_FINITE_NUMBER.format(Shown.value(text), "a number from " + plain(min) + " to " + plain(max))
-                    : Message.EXPECTED.format("a plain number from " + plain(min) + " to " + plain(max), s.describe());
+            String what = NOT_FINITE.matcher(text).matches() ? Message.NOT_A_FINITE_NUMBER.format(Shown.value(text), words)
+                    : Message.EXPECTED.format(words, s.describe());
             problems.add(s.position(), key, what);
             return OptionalDouble.empty();
         }
         double v = Double.parseDouble(text.replace("_", ""));
         if (!Double.isFinite(v)) {
-            problems.add(s.position(), key, Message.NOT_A_FINITE_NUMBER.format(Shown.value(text),
-                    "a number from " + plain(min) + " to " + plain(max)));
+            problems.add(s.position(), key, Message.NOT_A_FINITE_NUMBER.format(Shown.value(text), words));
             return OptionalDouble.empty();
         }
         if (v < min || v > max) {
             problems.add(s.position(), key, Message.NOT_IN_RANGE.format(plain(min), plain(max), Shown.value(s.text())));
+            return OptionalDouble.empty();
+        }
+        if (whole && v != Math.rint(v)) {
+            problems.add(s.position(), key, Message.EXPECTED.format(words, s.describe()));
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(v);
@@ -239,15 +255,8 @@ final class Section {
 
     /** A whole number within [min, max]. */
     Optional<Integer> integer(String name, int min, int max) {
-        OptionalDouble v = number(name, min, max);
-        if (v.isEmpty()) {
-            return Optional.empty();
-        }
-        if (v.getAsDouble() != Math.rint(v.getAsDouble())) {
-            problem(name, Message.EXPECTED.format("a whole number from " + min + " to " + max, "'" + raw(name) + "'"));
-            return Optional.empty();
-        }
-        return Optional.of((int) v.getAsDouble());
+        OptionalDouble v = number(name, min, max, true);
+        return v.isEmpty() ? Optional.empty() : Optional.of((int) v.getAsDouble());
     }
 
     /** The items of a list; a single scalar counts as a list of one. */
@@ -274,7 +283,19 @@ final class Section {
         }
     }
 
+    /** A number as people write it: 4, 0.5, 1e10 (not 4.0 or 10000000000). */
     static String plain(double v) {
-        return v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
+        if (v == Math.rint(v) && Math.abs(v) < 1e7) {
+            return String.valueOf((long) v);
+        }
+        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
+            String digits = String.valueOf((long) Math.abs(v));
+            String mantissa = digits.replaceAll("0+$", "");
+            if (mantissa.length() == 1) {
+                return (v < 0 ? "-" : "") + mantissa + "e" + (digits.length() - 1);
+            }
+            return String.valueOf((long) v);
+        }
+        return String.valueOf(v);
     }
 }
