@@ -17,6 +17,7 @@ public enum Message {
     UNKNOWN_MATERIAL("unknown material '%s'; known materials: %s", 2),
     UNKNOWN_KEY("unknown %s '%s'; allowed: %s", 3),
     INDEX_TOO_LOW("spring index C = D/d must exceed 0.75 for the curvature factor to be defined, got %s", 1),
+    SPRING_INDEX_TOO_LOW("spring index C = D/d must exceed 1 (the inner diameter D - d must be positive), got %s", 1),
     WAHL_INDEX_TOO_LOW("spring index C = D/d must exceed 1 for the Wahl factor to be defined, got %s", 1),
     SOLID_EXCEEDS_FREE("free length %.3f mm must exceed the solid length %.3f mm", 2),
     NO_SEPARATION("the spring cannot throw the payload: stored energy %.4g J does not exceed the work against gravity over the stroke", 1);
