@@ -36,7 +36,6 @@ public final class DesignEvaluator {
      * @param s   the spring as ordered
      * @param req the requirement (job, limits, envelope and design rules)
      * @return every working figure and margin; never null
-     * @throws dev.coilwise.error.BadInputException when a balance has no solution for the given input
      */
     public static Evaluation evaluate(Spring s, Requirement req) {
         SpringOptions opt = req.spring();
