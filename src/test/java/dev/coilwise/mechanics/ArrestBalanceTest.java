@@ -5,9 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import dev.coilwise.model.Arrest;
 import dev.coilwise.model.Gravity;
-import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
-import org.apache.commons.math3.ode.events.EventHandler;
-import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
+import dev.coilwise.testing.Motion;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
@@ -21,42 +19,7 @@ class ArrestBalanceTest {
 
     /** Largest compression found by integrating the motion from first contact until the speed is zero, m. */
     static double integrateToRest(double k, double m, double v0, double push, double preload) {
-        FirstOrderDifferentialEquations eq = new FirstOrderDifferentialEquations() {
-            @Override
-            public int getDimension() {
-                return 2;
-            }
-
-            @Override
-            public void computeDerivatives(double t, double[] y, double[] yDot) {
-                yDot[0] = y[1];
-                yDot[1] = (push - preload - k * y[0]) / m;
-            }
-        };
-        DormandPrince853Integrator ode = new DormandPrince853Integrator(1e-12, 1, 1e-14, 1e-13);
-        double period = 2 * Math.PI * Math.sqrt(m / k);
-        ode.addEventHandler(new EventHandler() {
-            @Override
-            public void init(double t0, double[] y0, double t) {
-            }
-
-            @Override
-            public double g(double t, double[] y) {
-                return y[1];
-            }
-
-            @Override
-            public Action eventOccurred(double t, double[] y, boolean increasing) {
-                return increasing ? Action.CONTINUE : Action.STOP;
-            }
-
-            @Override
-            public void resetState(double t, double[] y) {
-            }
-        }, period / 50, 1e-14, 1000);
-        double[] y = {0, v0};
-        ode.integrate(eq, 0, y, period, y);
-        return y[0];
+        return Motion.until((x, v) -> (push - preload - k * x) / m, (x, v) -> v, 0, v0, Math.sqrt(m / k))[0];
     }
 
     // Cases: rate N/m, mass kg, contact speed m/s, direction below horizontal deg, drive force N, preload N.

@@ -5,9 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import dev.coilwise.model.Gravity;
 import dev.coilwise.model.Launch;
-import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
-import org.apache.commons.math3.ode.events.EventHandler;
-import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
+import dev.coilwise.testing.Motion;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -21,43 +19,9 @@ class LaunchBalanceTest {
 
     /** Exit speed of a payload pushed along a line at angle θ by a massless spring released from x_c, m/s. */
     static double integrateToFreeLength(double k, double cocked, double m, double angle) {
-        FirstOrderDifferentialEquations eq = new FirstOrderDifferentialEquations() {
-            @Override
-            public int getDimension() {
-                return 2;
-            }
-
-            @Override
-            public void computeDerivatives(double t, double[] y, double[] yDot) {
-                double compression = cocked - y[0];
-                yDot[0] = y[1];
-                yDot[1] = (k * compression - m * Gravity.STANDARD * Math.sin(angle)) / m;
-            }
-        };
-        DormandPrince853Integrator ode = new DormandPrince853Integrator(1e-12, 1, 1e-14, 1e-13);
-        double quarter = 0.5 * Math.PI * Math.sqrt(m / k);
-        ode.addEventHandler(new EventHandler() {
-            @Override
-            public void init(double t0, double[] y0, double t) {
-            }
-
-            @Override
-            public double g(double t, double[] y) {
-                return cocked - y[0];
-            }
-
-            @Override
-            public Action eventOccurred(double t, double[] y, boolean increasing) {
-                return Action.STOP;
-            }
-
-            @Override
-            public void resetState(double t, double[] y) {
-            }
-        }, quarter / 50, 1e-14, 1000);
-        double[] y = {0, 0};
-        ode.integrate(eq, 0, y, 10 * quarter, y);
-        return y[1];
+        double weight = m * Gravity.STANDARD * Math.sin(angle);
+        return Motion.until((x, v) -> (k * (cocked - x) - weight) / m, (x, v) -> cocked - x, 0, 0,
+                Math.sqrt(m / k))[1];
     }
 
     // Cases: rate N/m, cocked compression m, payload kg, angle above horizontal deg.
