@@ -3,6 +3,7 @@ package dev.coilwise.dynamics;
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.model.Arrest;
 import dev.coilwise.model.Job;
+import dev.coilwise.model.Launch;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -81,9 +82,9 @@ public final class DynamicsFlags {
         if (Double.isNaN(arrest ? s.reboundSpeed() : s.exitSpeed())) {
             w.add("the simulated event did not end within the simulated time; its figures are incomplete");
         }
-        if (!arrest && s.exitSpeed() == 0) {
+        if (job instanceof Launch l && s.exitSpeed() == 0) {
             w.add(fmt("the payload does not leave the guide: it comes to rest %.1f mm below the muzzle",
-                    -s.apex() / Math.sin(((dev.coilwise.model.Launch) job).angle()) * 1e3));
+                    -s.apex() / Math.sin(l.angle()) * 1e3));
         }
         if (s.peakStress() > e.allowableStress()) {
             w.add(fmt("simulated peak stress %.0f MPa exceeds the allowable %.0f MPa (the energy balance gives "

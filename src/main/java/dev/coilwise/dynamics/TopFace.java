@@ -49,10 +49,6 @@ final class TopFace {
         return stop != Double.NEGATIVE_INFINITY;
     }
 
-    double stop() {
-        return stop;
-    }
-
     /** Position of the face under the current flags, m. */
     double position(double[] y) {
         if (loadOn) {

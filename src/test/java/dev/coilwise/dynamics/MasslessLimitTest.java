@@ -101,4 +101,21 @@ class MasslessLimitTest {
         assertThat(s.exitSpeed()).isCloseTo(expectedSpeed, within(TOL * expectedSpeed));
         assertThat(s.apex()).isCloseTo(expectedApex, within(TOL * expectedApex));
     }
+
+    // A spring cocked for a 1 cm throw without losses, fired against 90 % losses, cannot clear the guide. While the
+    // spring still presses on it, work–energy gives the payload's rest point u* below the muzzle:
+    // ½k(x_c² − u*²) = (m g + f)(x_c − u*), f = 0.9·k·x_c/2, so u* = 2(m g + f)/k − x_c.
+    @Test
+    void launchTooWeakForItsLossesStallsWhereWorkEnergySaysAndIsFlagged() {
+        double m = 0.2;
+        Evaluation cocked = DesignEvaluator.evaluate(SPRING, Fixtures.launch(m, 0.01, Math.PI / 2, 0));
+        double xc = cocked.workingDeflection();
+        SimulationSummary s = Simulator.simulate(SPRING, Fixtures.launch(m, 0.01, Math.PI / 2, 0.9), cocked,
+                SimulationOptions.defaults()).summary();
+        double rest = 2 * (m * G + 0.9 * K * xc / 2) / K - xc;
+        assertThat(rest).isPositive();
+        assertThat(s.exitSpeed()).isZero();
+        assertThat(-s.apex()).isCloseTo(rest, within(TOL * rest));
+        assertThat(s.flags()).anyMatch(f -> f.startsWith("the payload does not leave the guide"));
+    }
 }
