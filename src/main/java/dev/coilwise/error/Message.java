@@ -16,7 +16,14 @@ public enum Message {
     UNKNOWN_KEY("unknown %s '%s'; allowed: %s", 3),
     INDEX_TOO_LOW("spring index C = D/d must exceed 0.75 for the curvature factor to be defined, got %s", 1),
     SOLID_EXCEEDS_FREE("free length %.3f mm must exceed the solid length %.3f mm", 2),
-    NO_SEPARATION("the spring cannot throw the payload: stored energy %.4g J does not exceed the work against gravity over the stroke", 1);
+    NO_SEPARATION("the spring cannot throw the payload: stored energy %.4g J does not exceed the work against gravity over the stroke", 1),
+    CATALOG_MAPPING_INVALID("%s: the column mapping has %d problem(s):%n%s", 3),
+    CATALOG_MISSING_FIELD("no column for %s (%s); expected one of: %s", 3),
+    CATALOG_EMPTY_VALUE("%s is required but the cell is empty", 1),
+    CATALOG_BAD_NUMBER("%s must be a number in %s, got '%s'", 3),
+    CATALOG_RAGGED_ROW("row has %d fields but the header has %d", 2),
+    CATALOG_STATED_DIFFERS("stated %s %.4g %s differs from the computed %.4g %s by %.0f %% (more than %.0f %%); the part is evaluated with the computed value", 7),
+    CATALOG_INVALID("%s: %d error(s); nothing was imported (fix the rows, or read the catalogue leniently to skip them):%n%s", 3);
 
     private final String template;
     private final int arity;
