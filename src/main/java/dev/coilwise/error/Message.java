@@ -58,7 +58,16 @@ public enum Message {
     LIST_EMPTY("must list at least one %s", 1),
     LOW_ABOVE_HIGH("the low end %s exceeds the high end %s", 2),
     STOCK_NOT_FOUND("file not found: %s", 1),
-    NO_ACTIVE_COILS("'%s' total coils leave no active coils with %s ends (%d inactive coils)", 3);
+    NO_ACTIVE_COILS("'%s' total coils leave no active coils with %s ends (%d inactive coils)", 3),
+
+    // Stock catalogues (dev.coilwise.catalog).
+    CATALOG_MAPPING_INVALID("%s: the column mapping has %d problem(s):%n%s", 3),
+    CATALOG_MISSING_FIELD("no column for %s (%s); expected one of: %s", 3),
+    CATALOG_EMPTY_VALUE("%s is required but the cell is empty", 1),
+    CATALOG_BAD_NUMBER("%s must be a number in %s, got '%s'", 3),
+    CATALOG_RAGGED_ROW("row has %d fields but the header has %d", 2),
+    CATALOG_STATED_DIFFERS("stated %s %.4g %s differs from the computed %.4g %s by %.0f %% (more than %.0f %%); the part is evaluated with the computed value", 7),
+    CATALOG_INVALID("%s: %d error(s); nothing was imported (fix the rows, or read the catalogue leniently to skip them):%n%s", 3);
 
     private final String template;
     private final int arity;

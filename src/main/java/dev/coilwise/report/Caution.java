@@ -2,9 +2,10 @@ package dev.coilwise.report;
 
 /** The safety caution every user-facing output carries. */
 public final class Caution {
-    /** One line, for headers and chart footers. */
-    public static final String TEXT = "Design aid only: springs store energy; confirm the design by test. Local codes, "
-            + "standards and licensed engineering practice govern.";
+    /** One paragraph, plain text. */
+    public static final String TEXT = "Caution: springs store energy. A launched payload or a failing buffer can "
+            + "injure people. These figures are a design aid, not a certification: confirm the spring by test in its "
+            + "application before use. Local codes, standards and licensed engineering practice govern.";
 
     private Caution() {
     }
