@@ -35,8 +35,8 @@ class MessageTest {
         List<Character> conv = conversions(message.template());
         assertThat(conv).as(message.name()).hasSize(message.arity());
         // Fill each placeholder with an argument of its kind; the result carries no unfilled specifier.
-        Object[] args = conv.stream().map(c -> "fgeaEG".indexOf(c) >= 0 ? (Object) 1.5 : (Object) "x").toArray();
-        assertThat(message.format(args)).doesNotContain("%");
+        Object[] args = conv.stream().map(c -> "fgeaEG".indexOf(c) >= 0 ? (Object) 1.5 : "dxXo".indexOf(c) >= 0 ? (Object) 2 : (Object) "x").toArray();
+        assertThat(message.format(args)).doesNotContainPattern("%[sdfgeaEGxo]");
     }
 
     @Test
