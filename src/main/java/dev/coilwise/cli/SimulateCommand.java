@@ -109,7 +109,7 @@ final class SimulateCommand extends BaseCommand {
         StringBuilder sb = new StringBuilder();
         boolean arrest = "arrest".equals(e.job());
         sb.append(label).append(": ").append(s.material().key()).append(' ').append(s.ends().key()).append(", d ")
-                .append(u.lenWithUnit(s.wireDiameter())).append(", OD ").append(u.lenWithUnit(s.outerDiameter()))
+                .append(u.wireWithUnit(s.wireDiameter())).append(", OD ").append(u.lenWithUnit(s.outerDiameter()))
                 .append(DisplayUnits.fmt(", Na %.2f, L0 ", s.activeCoils())).append(u.lenWithUnit(s.freeLength()))
                 .append('\n');
         sb.append(DisplayUnits.fmt("simulated with %d lumped masses (active coils only; the end coils are not"

@@ -39,7 +39,7 @@ public final class ShortlistTable {
                     for (NearMiss m : d.nearest()) {
                         Spring s = m.evaluation().spring();
                         sb.append("  ").append(s.material().key()).append(' ').append(s.ends().key())
-                                .append(" d ").append(u.lenWithUnit(s.wireDiameter())).append(", OD ")
+                                .append(" d ").append(u.wireWithUnit(s.wireDiameter())).append(", OD ")
                                 .append(u.lenWithUnit(s.outerDiameter())).append(": ")
                                 .append(Relaxation.describe(m.violated(), r.requirement(), u)).append('\n');
                     }
