@@ -28,6 +28,15 @@ final class CoilwiseCommand implements Runnable {
     static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new CoilwiseCommand());
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> { // faults outside a command's own handling
+            boolean debug = parsed.originalArgs().contains("--debug");
+            line.getErr().println(ex instanceof dev.coilwise.error.BadInputException ? "error: " + ex.getMessage()
+                    : ExitCode.faultLine(ex, debug));
+            if (debug) {
+                ex.printStackTrace(line.getErr());
+            }
+            return ExitCode.of(ex);
+        });
         return cl;
     }
 
