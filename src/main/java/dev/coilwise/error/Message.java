@@ -25,7 +25,7 @@ public enum Message {
     // Requirement and spring files (dev.coilwise.requirement). InputProblem adds the file, line, column and key.
     PROBLEMS_IN_FILE("%d problem(s) in %s:", 2),
     TOO_MANY_PROBLEMS("more than %d problems; the rest are not listed", 1),
-    FILE_TOO_LARGE("the file %s bytes; coilwise reads files of at most %d bytes (1 MiB)", 2),
+    FILE_TOO_LARGE("the file %s bytes; coilwise reads files of at most %d bytes (%d MiB)", 3),
     FILE_UNREADABLE("cannot read the file: %s", 1),
     YAML_SYNTAX("not valid YAML: %s", 1),
     YAML_EMPTY("the file is empty; give at least %s", 1),
@@ -39,6 +39,7 @@ public enum Message {
     ONE_OF_TWO_MISSING("missing; give %s or %s", 2),
     BOTH_GIVEN("give %s or %s, not both", 2),
     EXPECTED("expected %s, got %s", 2),
+    CONTROL_CHARACTER("'%s' holds a control character (a tab, a line break, an escape); write plain text on one line", 1),
     UNDER_OTHER_KEY("'%s' is %s: give it as %s, or give %s", 4),
     NO_VALUE("has no value; give %s such as %s", 2),
     NO_UNIT("'%s' has no unit; give %s such as %s", 3),

@@ -1,6 +1,7 @@
 package dev.coilwise.requirement;
 
 import dev.coilwise.error.InternalFaultException;
+import dev.coilwise.error.Message;
 import dev.coilwise.materials.MaterialTable;
 import dev.coilwise.model.Envelope;
 import dev.coilwise.model.Job;
@@ -69,6 +70,9 @@ public final class RequirementReader {
         }
         Section top = new Section("", root.orElseThrow(), new YamlNode.Position(1, 1), problems, TOP_KEYS);
         String title = top.has("title") ? top.text("title").orElse(defaultTitle) : defaultTitle;
+        if (title.chars().anyMatch(Character::isISOControl)) {
+            top.problem("title", Message.CONTROL_CHARACTER.format(Shown.value(title)));
+        }
         Optional<String> job = top.has("job") ? top.choice("job", List.of(JobReader.ARREST, JobReader.LAUNCH)) : Optional.empty();
         if (!top.has("job")) {
             top.missing("job", "what the spring must do: arrest or launch");

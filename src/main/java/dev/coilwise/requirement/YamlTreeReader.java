@@ -62,7 +62,7 @@ final class YamlTreeReader {
     static Optional<YamlNode.Mapping> read(String text, Problems problems, String needed) {
         int bytes = text.getBytes(StandardCharsets.UTF_8).length;
         if (bytes > MAX_BYTES) {
-            problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format("has " + bytes, MAX_BYTES));
+            problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format("has " + bytes, MAX_BYTES, MAX_BYTES >> 20));
             return Optional.empty();
         }
         return new YamlTreeReader(problems).readTree(FileText.stripBom(text), needed);
