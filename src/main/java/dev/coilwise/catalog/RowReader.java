@@ -54,6 +54,10 @@ final class RowReader {
             }
             String v = src.isConstant() ? src.constant() : record.get(src.column());
             v = v == null ? "" : v.strip();
+            if (v.chars().anyMatch(Character::isISOControl)) {
+                issue(Severity.ERROR, f, f.description() + " '" + v + "' holds a control character; write plain text");
+                return null;
+            }
             if (v.isEmpty()) {
                 if (f.required()) {
                     issue(Severity.ERROR, f, Message.CATALOG_EMPTY_VALUE.format(f.description()));
