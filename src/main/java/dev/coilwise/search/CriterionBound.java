@@ -1,0 +1,94 @@
+package dev.coilwise.search;
+
+import dev.coilwise.mechanics.ArrestBalance;
+import dev.coilwise.mechanics.LaunchBalance;
+import dev.coilwise.model.Arrest;
+import dev.coilwise.model.Gravity;
+import dev.coilwise.model.Launch;
+import dev.coilwise.model.RankBy;
+import dev.coilwise.model.Requirement;
+
+/**
+ * Lower bounds of the ranking criterion over every design of one family at a mean diameter D and a number of active
+ * coils Na (any free length). Each bound never exceeds the criterion that {@link Objective#value} gives for any such
+ * design, so a cell whose bound is above the family's incumbent cannot hold the family's best.
+ *
+ * <ul>
+ *   <li>mass, robustness: Nt·π·D·(πd²/4)·ρ, the mass itself (it does not depend on the free length); cost: the mass
+ *       times the relative cost. Both rise with Na.</li>
+ *   <li>solid length: Ls(Na), exact; rises with Na. Outer diameter: D + d, exact.</li>
+ *   <li>free length: L0 ≥ Ls + (1 + ξ)·x by the coil-bind rule, with x the massless working deflection (exact for an
+ *       arrest without a pocket, a lower bound for a launch since the spring's own mass only adds to it; 0 with a
+ *       pocket, where L0 ≥ pocket instead); rises with Na.</li>
+ *   <li>peak force: arrest, Fc + √(2kE + n²) with n = |Fc| without a pocket (exact) and max(0, −Fc) with one
+ *       (see {@link RateBounds}); launch, (b + √(b² + 2ηkc))/η, the massless cocking force. Both fall as Na rises
+ *       (k falls).</li>
+ * </ul>
+ */
+final class CriterionBound {
+    private final RankBy by;
+    private final Family family;
+    private final double area;
+    private final double gd4;
+    private final double xi;
+    private final Arrest arrest;
+    private final Launch launch;
+    private final double pocket;
+
+    CriterionBound(Requirement req, Family family, double shearModulus) {
+        this.by = req.ranking().by();
+        this.family = family;
+        double d = family.wireDiameter();
+        this.area = Math.PI * d * d / 4;
+        this.gd4 = shearModulus * d * d * d * d;
+        this.xi = req.spring().clashAllowance();
+        this.arrest = req.job() instanceof Arrest a ? a : null;
+        this.launch = req.job() instanceof Launch l ? l : null;
+        this.pocket = arrest != null && req.envelope().pocketLength().isPresent()
+                ? req.envelope().pocketLength().getAsDouble() : Double.NaN;
+    }
+
+    /** Whether the bound falls (rather than rises) as active coils are added at a fixed D. */
+    boolean fallsWithCoils() {
+        return by == RankBy.PEAK_FORCE;
+    }
+
+    /** The lower bound at mean diameter {@code dm} (m) and {@code na} active coils. */
+    double at(double dm, double na) {
+        double d = family.wireDiameter();
+        double nt = family.ends().totalCoils(na);
+        return switch (by) {
+            case MASS, ROBUSTNESS -> nt * Math.PI * dm * area * family.material().density();
+            case COST -> nt * Math.PI * dm * area * family.material().density() * family.material().relativeCost();
+            case SOLID_LENGTH -> family.ends().solidLength(d, nt);
+            case OUTER_DIAMETER -> dm + d;
+            case FREE_LENGTH -> freeLength(dm, na, family.ends().solidLength(d, nt));
+            case PEAK_FORCE -> peakForce(gd4 / (8 * dm * dm * dm * na));
+        };
+    }
+
+    private double freeLength(double dm, double na, double ls) {
+        if (!Double.isNaN(pocket)) {
+            return Math.max(pocket, ls);
+        }
+        double k = gd4 / (8 * dm * dm * dm * na);
+        double x = arrest != null ? ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(),
+                arrest.pushForce(), 0)
+                : LaunchBalance.cockedCompression(k, launch.height(), launch.mass(), 0, launch.angle(),
+                        launch.efficiency());
+        return ls + (1 + xi) * x;
+    }
+
+    private double peakForce(double k) {
+        if (arrest != null) {
+            double fc = arrest.pushForce();
+            double n = Double.isNaN(pocket) ? Math.abs(fc) : Math.max(0, -fc);
+            return fc + Math.sqrt(2 * k * arrest.kineticEnergy() + n * n);
+        }
+        double eta = launch.efficiency();
+        double b = launch.mass() * Gravity.STANDARD * Math.sin(launch.angle());
+        double v = launch.requiredExitSpeed();
+        double c = 0.5 * launch.mass() * v * v;
+        return (b + Math.sqrt(b * b + 2 * eta * k * c)) / eta;
+    }
+}

@@ -1,0 +1,297 @@
+package dev.coilwise.search;
+
+import dev.coilwise.mechanics.ArrestBalance;
+import dev.coilwise.mechanics.HardLimits;
+import dev.coilwise.mechanics.LaunchBalance;
+import dev.coilwise.mechanics.Stress;
+import dev.coilwise.mechanics.Surge;
+import dev.coilwise.model.Arrest;
+import dev.coilwise.model.Launch;
+import dev.coilwise.model.RankBy;
+import dev.coilwise.model.Requirement;
+import dev.coilwise.model.SpringOptions;
+import java.util.Arrays;
+
+/**
+ * The pruned search of one family, confined to one thread (see {@link PrunedSearch} for the method). Mean diameters
+ * are visited best bound first, so the incumbent is good early and the rest are cut off as soon as their bound passes
+ * it.
+ */
+final class FamilyScan {
+    /**
+     * Relative slack on every comparison of a bound with the incumbent: a cell is skipped only when its bound is above
+     * the incumbent by more than this, so designs that tie with the incumbent (and rounding in the bounds) are
+     * always evaluated.
+     */
+    static final double TIE_SLACK = 1e-6;
+
+    private final DesignSpace space;
+    private final Requirement req;
+    private final Family f;
+    private final Grid g;
+    private final FamilyBest acc;
+    private final HardLimits limits;
+    private final CriterionBound bound;
+    private final double d;
+    private final double gd4;
+    private final double xi;
+    private final Arrest arrest;
+    private final Launch launch;
+    private final double pocket;
+    private final double energy;
+    private final double push;
+    private final double stroke;
+    private final double maxFree;
+    /** The peak-force and deceleration limits as one force cap, N (+∞ when none). */
+    private double forceCap;
+    private double lastForce = Double.NaN;
+    private RateBounds lastRates;
+
+    private FamilyScan(DesignSpace space, Family f) {
+        this.space = space;
+        this.req = space.requirement();
+        this.f = f;
+        this.g = space.grid();
+        this.acc = new FamilyBest(f, space);
+        this.limits = HardLimits.of(req, f.material(), f.wireDiameter());
+        this.bound = new CriterionBound(req, f, limits.shearModulus());
+        this.d = f.wireDiameter();
+        this.gd4 = limits.shearModulus() * d * d * d * d;
+        this.xi = req.spring().clashAllowance();
+        this.arrest = req.job() instanceof Arrest a ? a : null;
+        this.launch = req.job() instanceof Launch l ? l : null;
+        this.pocket = arrest != null && req.envelope().pocketLength().isPresent()
+                ? req.envelope().pocketLength().getAsDouble() : Double.NaN;
+        this.energy = arrest == null ? 0 : arrest.kineticEnergy();
+        this.push = arrest == null ? 0 : arrest.pushForce();
+        this.stroke = req.limits().stroke();
+        this.maxFree = req.envelope().maxFreeLength().orElse(Double.POSITIVE_INFINITY);
+    }
+
+    /** Searches family {@code f} of {@code space}; returns its best design and counts. */
+    static FamilyBest search(DesignSpace space, Family f) {
+        FamilyScan scan = new FamilyScan(space, f);
+        scan.run();
+        return scan.acc;
+    }
+
+    private void run() {
+        double speed = arrest != null ? arrest.contactSpeed() : launch.requiredExitSpeed();
+        double vLim = Surge.speedLimit(limits.allowableStress(), f.material().density(), limits.shearModulus());
+        if (speed > vLim * (1 + 1e-6)) {
+            return; // the surge limit depends on the family alone (a launch leaves faster than it is asked to, never slower)
+        }
+        SpringOptions opt = req.spring();
+        long[] dr = g.meanDiameterRange(d, opt);
+        long dLo = dr[0];
+        long dHi = dr[1];
+        if (req.envelope().rod().isPresent()) {
+            double rod = req.envelope().rod().getAsDouble();
+            dLo = Math.max(dLo, g.lengthIndexAtLeast(rod + req.envelope().clearance().of(rod) + d) - 1);
+        }
+        if (req.envelope().bore().isPresent()) {
+            double bore = req.envelope().bore().getAsDouble();
+            dHi = Math.min(dHi, g.lengthIndexAtMost(bore - req.envelope().clearance().of(bore) - d) + 1);
+        }
+        if (dHi < dLo) {
+            return;
+        }
+        long[] coils = g.coilRange(opt);
+        if (req.envelope().maxFreeLength().isPresent()) { // Ls = d(Na + extra) < L0 ≤ Lmax
+            double extra = f.ends().solidLength(d, f.ends().totalCoils(0)) / d;
+            coils[1] = Math.min(coils[1], (long) Math.ceil((maxFree / d - extra) / Grid.COIL_STEP) + 1);
+        }
+        forceCap = req.limits().peakForce().orElse(Double.POSITIVE_INFINITY);
+        if (arrest != null && req.limits().deceleration().isPresent()) {
+            forceCap = Math.min(forceCap, arrest.mass() * req.limits().deceleration().getAsDouble() + push);
+        }
+        Cells[] plan = new Cells[(int) (dHi - dLo + 1)];
+        int n = 0;
+        for (long jd = dLo; jd <= dHi; jd++) {
+            Cells c = cells(g.length(jd), coils);
+            if (c != null) {
+                plan[n++] = c;
+            }
+        }
+        // Visit in order of the bound rounded to float (ties by diameter): nearly best first, and cheap to sort.
+        // The rounding can misorder close bounds, so every diameter's own bound is compared, not just the first.
+        long[] order = new long[n];
+        for (int i = 0; i < n; i++) {
+            order[i] = (long) Float.floatToIntBits((float) plan[i].bound()) << 32 | i;
+        }
+        Arrays.sort(order);
+        for (long key : order) {
+            Cells c = plan[(int) key];
+            if (!beaten(c.bound())) {
+                searchDiameter(c);
+            }
+        }
+    }
+
+    /**
+     * The active-coil window at one mean diameter, with the criterion's bound over it.
+     *
+     * @param solidForce force at which the stress reaches the allowable at this diameter, N
+     * @param maxForce   the smallest cap on the peak force at this diameter, N
+     */
+    private record Cells(double dm, long nLo, long nHi, double bound, double solidForce, double maxForce) {
+    }
+
+    private Cells cells(double dm, long[] coils) {
+        double fAllow = Stress.forceFor(limits.allowableStress(), dm, d);
+        double maxForce = Math.min(forceCap, req.spring().solidSafe() ? fAllow / (1 + xi) : fAllow);
+        RateBounds rb = maxForce == lastForce ? lastRates : RateBounds.of(req, maxForce * (1 + TIE_SLACK));
+        lastForce = maxForce;
+        lastRates = rb;
+        if (rb.empty()) {
+            return null;
+        }
+        double naPerRate = gd4 / (8 * dm * dm * dm); // Na = naPerRate / k
+        long nLo = coils[0];
+        long nHi = coils[1];
+        if (rb.high() < Double.POSITIVE_INFINITY) {
+            nLo = Math.max(nLo, (long) Math.floor(naPerRate / rb.high() / Grid.COIL_STEP) - 1);
+        }
+        if (rb.low() > 0) {
+            nHi = Math.min(nHi, (long) Math.ceil(naPerRate / rb.low() / Grid.COIL_STEP) + 1);
+        }
+        if (!Double.isNaN(pocket)) {
+            nHi = Math.min(nHi, lastBindable(dm, nLo, nHi) + 2);
+        }
+        if (nLo > nHi) {
+            return null;
+        }
+        return new Cells(dm, nLo, nHi, bound.at(dm, g.coils(bound.fallsWithCoils() ? nHi : nLo)), fAllow, maxForce);
+    }
+
+    /**
+     * The largest coil index in [nLo, nHi] at which {@link PreloadWindow#bindPossible} holds (nLo − 1 when none), by
+     * bisection, since it holds up to some count and fails beyond it. The caller widens the result by two steps.
+     */
+    private long lastBindable(double dm, long nLo, long nHi) {
+        long good = nLo - 1;
+        long bad = nHi + 1;
+        while (bad - good > 1) {
+            long mid = (good + bad) >>> 1;
+            double na = g.coils(mid);
+            double k = gd4 / (8 * dm * dm * dm * na);
+            if (PreloadWindow.bindPossible(k, f.ends().solidLength(d, f.ends().totalCoils(na)), pocket, energy, push, xi)) {
+                good = mid;
+            } else {
+                bad = mid;
+            }
+        }
+        return good;
+    }
+
+    private boolean beaten(double lowerBound) {
+        return lowerBound > acc.incumbent() * (1 + TIE_SLACK);
+    }
+
+    private void searchDiameter(Cells c) {
+        if (bound.fallsWithCoils()) {
+            for (long jn = c.nHi(); jn >= c.nLo() && !beaten(bound.at(c.dm(), g.coils(jn))); jn--) {
+                searchCell(c, g.coils(jn));
+            }
+            return;
+        }
+        boolean firstWins = Objective.nonDecreasingInCoils(req.ranking().by());
+        for (long jn = c.nLo(); jn <= c.nHi() && !beaten(bound.at(c.dm(), g.coils(jn))); jn++) {
+            if (searchCell(c, g.coils(jn)) && firstWins) {
+                return;
+            }
+        }
+    }
+
+    /** Tries the free lengths of one (D, Na) cell; returns whether a feasible design was found. */
+    private boolean searchCell(Cells c, double na) {
+        double dm = c.dm();
+        double ls = f.ends().solidLength(d, f.ends().totalCoils(na));
+        double k = gd4 / (8 * dm * dm * dm * na); // as Spring.rate()
+        if (!Double.isNaN(pocket)) {
+            return searchPocket(c, na, k, ls);
+        }
+        long j0 = space.firstFreeLengthIndex(ls);
+        long jCap = g.lengthIndexAtMost(space.freeLengthCap(f, dm, ls, k));
+        double work = arrest != null
+                ? ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(), arrest.pushForce(), 0)
+                : LaunchBalance.cockedCompression(k, launch.height(), launch.mass(),
+                        na * Math.PI * dm * (Math.PI * d * d / 4) * f.material().density(), launch.angle(),
+                        launch.efficiency());
+        long j = Math.max(j0, g.lengthIndexAtLeast(ls + (1 + xi) * work));
+        while (j > j0 && coilBindHolds(g.length(j - 1), ls, work)) {
+            j--;
+        }
+        while (!coilBindHolds(g.length(j), ls, work)) {
+            j++;
+        }
+        return j <= jCap && acc.offer(limits, dm, na, g.length(j));
+    }
+
+    /** The coil-bind rule exactly as the evaluator applies it. */
+    private boolean coilBindHolds(double l0, double ls, double total) {
+        return HardLimits.atMost(total, (l0 - ls) / (1 + xi));
+    }
+
+    private boolean searchPocket(Cells c, double na, double k, double ls) {
+        double dm = c.dm();
+        PreloadWindow w = PreloadWindow.of(k, ls, pocket, energy, push, stroke, c.maxForce() * (1 + TIE_SLACK), xi,
+                req.spring().solidSafe() ? c.solidForce() * (1 + TIE_SLACK) : Double.POSITIVE_INFINITY, maxFree);
+        long lo = g.lengthIndexAtLeast(pocket) - 1;
+        long hi = Long.MAX_VALUE;
+        if (w.low() > Double.NEGATIVE_INFINITY) {
+            lo = Math.max(lo, g.lengthIndexAtLeast(pocket + w.low()) - 1);
+        }
+        if (w.high() < Double.POSITIVE_INFINITY) {
+            hi = g.lengthIndexAtMost(pocket + w.high()) + 1;
+        }
+        if (lo > hi) {
+            return false;
+        }
+        lo = Math.max(lo, space.firstFreeLengthIndex(ls));
+        hi = Math.min(hi, g.lengthIndexAtMost(space.freeLengthCap(f, dm, ls, k)));
+        if (lo > hi) {
+            return false;
+        }
+        if (req.ranking().by() == RankBy.PEAK_FORCE) {
+            return searchPocketByPeak(dm, na, k, lo, hi);
+        }
+        for (long j = lo; j <= hi; j++) {
+            if (acc.offer(limits, dm, na, g.length(j))) {
+                return true; // every other criterion is the same across the cell, and the shorter free length wins ties
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Free lengths of a pocket cell for the peak-force criterion, in order of rising peak force: outwards from the
+     * preload that equals the push, P(F0) = Fc + √(2kE + (F0 − Fc)²), stopping on each side once P passes the
+     * incumbent.
+     */
+    private boolean searchPocketByPeak(double dm, double na, double k, long lo, long hi) {
+        double fc = arrest.pushForce();
+        long mid = Math.min(hi, Math.max(lo, g.lengthIndexAtMost(pocket + Math.max(0, fc) / k)));
+        long down = mid;
+        long up = mid + 1;
+        boolean found = false;
+        while (down >= lo || up <= hi) {
+            double pDown = down >= lo ? peakAt(k, down) : Double.POSITIVE_INFINITY;
+            double pUp = up <= hi ? peakAt(k, up) : Double.POSITIVE_INFINITY;
+            boolean takeDown = pDown <= pUp;
+            double p = takeDown ? pDown : pUp;
+            if (beaten(p) || p == Double.POSITIVE_INFINITY) {
+                return found;
+            }
+            long j = takeDown ? down-- : up++;
+            found |= acc.offer(limits, dm, na, g.length(j));
+        }
+        return found;
+    }
+
+    private double peakAt(double k, long j) {
+        double f0 = k * Math.max(0, g.length(j) - pocket);
+        double b = f0 - arrest.pushForce();
+        return arrest.pushForce() + Math.sqrt(2 * k * arrest.kineticEnergy() + b * b);
+    }
+}
