@@ -93,6 +93,11 @@ public final class HardLimits {
         return shearModulus;
     }
 
+    /** Young's modulus E of this wire, Pa. */
+    public double youngsModulus() {
+        return youngsModulus;
+    }
+
     /** Whether {@code s} meets every hard limit; {@code s} must be of this material and wire diameter. */
     public boolean feasible(Spring s) {
         if (s.material() != material || s.wireDiameter() != d) {

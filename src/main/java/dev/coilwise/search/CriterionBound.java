@@ -53,6 +53,24 @@ final class CriterionBound {
         return by == RankBy.PEAK_FORCE;
     }
 
+    /**
+     * The smallest difference between two unequal values of the criterion within the family, SI (0 when the
+     * criterion is not quantised): the grid step for the free length and the outer diameter, d/4 for the solid
+     * length (quarter coils). Designs can tie on these criteria, and ties go to the lighter spring.
+     */
+    double quantum(Grid g) {
+        return switch (by) {
+            case FREE_LENGTH, OUTER_DIAMETER -> g.step();
+            case SOLID_LENGTH -> family.wireDiameter() * Grid.COIL_STEP;
+            default -> 0;
+        };
+    }
+
+    /** The spring mass at mean diameter {@code dm} (m) and {@code na} active coils, kg (the first tie-break). */
+    double mass(double dm, double na) {
+        return family.ends().totalCoils(na) * Math.PI * dm * area * family.material().density();
+    }
+
     /** The lower bound at mean diameter {@code dm} (m) and {@code na} active coils. */
     double at(double dm, double na) {
         double d = family.wireDiameter();
@@ -69,7 +87,7 @@ final class CriterionBound {
 
     private double freeLength(double dm, double na, double ls) {
         if (!Double.isNaN(pocket)) {
-            return Math.max(pocket, ls);
+            return Math.max(pocket * (1 - 1e-9), ls); // the pocket margin's own tolerance
         }
         double k = gd4 / (8 * dm * dm * dm * na);
         double x = arrest != null ? ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(),

@@ -16,6 +16,7 @@ final class FamilyBest {
     private final Comparator<Candidate> order;
     private Candidate best;
     private double incumbent = Double.POSITIVE_INFINITY;
+    private double incumbentMass = Double.POSITIVE_INFINITY;
     long evaluated;
     long feasible;
 
@@ -63,12 +64,18 @@ final class FamilyBest {
         if (best == null || order.compare(c, best) < 0) {
             best = c;
             incumbent = Objective.value(by, e);
+            incumbentMass = e.mass();
         }
     }
 
     /** Criterion value of the incumbent, or +∞ when there is none. */
     double incumbent() {
         return incumbent;
+    }
+
+    /** Mass of the incumbent, kg, or +∞ when there is none. */
+    double incumbentMass() {
+        return incumbentMass;
     }
 
     Candidate best() {

@@ -11,6 +11,7 @@ import dev.coilwise.model.RankBy;
 import dev.coilwise.model.Requirement;
 import dev.coilwise.model.SpringOptions;
 import java.util.Arrays;
+import java.util.Comparator;
 
 /**
  * The pruned search of one family, confined to one thread (see {@link PrunedSearch} for the method). Mean diameters
@@ -42,6 +43,7 @@ final class FamilyScan {
     private final double push;
     private final double stroke;
     private final double maxFree;
+    private final double quantum;
     /** The peak-force and deceleration limits as one force cap, N (+∞ when none). */
     private double forceCap;
     private double lastForce = Double.NaN;
@@ -66,6 +68,7 @@ final class FamilyScan {
         this.push = arrest == null ? 0 : arrest.pushForce();
         this.stroke = req.limits().stroke();
         this.maxFree = req.envelope().maxFreeLength().orElse(Double.POSITIVE_INFINITY);
+        this.quantum = bound.quantum(g);
     }
 
     /** Searches family {@code f} of {@code space}; returns its best design and counts. */
@@ -113,28 +116,34 @@ final class FamilyScan {
                 plan[n++] = c;
             }
         }
-        // Visit in order of the bound rounded to float (ties by diameter): nearly best first, and cheap to sort.
-        // The rounding can misorder close bounds, so every diameter's own bound is compared, not just the first.
-        long[] order = new long[n];
-        for (int i = 0; i < n; i++) {
-            order[i] = (long) Float.floatToIntBits((float) plan[i].bound()) << 32 | i;
-        }
-        Arrays.sort(order);
-        for (long key : order) {
-            Cells c = plan[(int) key];
-            if (!beaten(c.bound())) {
+        // Best bound first (then lightest, then smallest diameter), so the incumbent is good early; every diameter's
+        // own bound is still compared with it.
+        Cells[] order = Arrays.copyOf(plan, n);
+        Arrays.sort(order, VISIT_ORDER);
+        for (Cells c : order) {
+            if (!beaten(c.bound(), c.mass())) {
                 searchDiameter(c);
             }
         }
     }
 
+    private static final Comparator<Cells> VISIT_ORDER = (a, b) -> {
+        int c = Double.compare(a.bound(), b.bound());
+        if (c == 0) {
+            c = Double.compare(a.mass(), b.mass());
+        }
+        return c != 0 ? c : Double.compare(a.dm(), b.dm());
+    };
+
     /**
      * The active-coil window at one mean diameter, with the criterion's bound over it.
      *
+     * @param mass       the lightest spring of the window, kg
      * @param solidForce force at which the stress reaches the allowable at this diameter, N
      * @param maxForce   the smallest cap on the peak force at this diameter, N
      */
-    private record Cells(double dm, long nLo, long nHi, double bound, double solidForce, double maxForce) {
+    private record Cells(double dm, long nLo, long nHi, double bound, double mass, double solidForce,
+                         double maxForce) {
     }
 
     private Cells cells(double dm, long[] coils) {
@@ -157,11 +166,14 @@ final class FamilyScan {
         }
         if (!Double.isNaN(pocket)) {
             nHi = Math.min(nHi, lastBindable(dm, nLo, nHi) + 2);
+        } else if (maxFree < Double.POSITIVE_INFINITY && nLo <= nHi) {
+            nHi = Math.min(nHi, lastFitting(dm, nLo, nHi) + 2);
         }
         if (nLo > nHi) {
             return null;
         }
-        return new Cells(dm, nLo, nHi, bound.at(dm, g.coils(bound.fallsWithCoils() ? nHi : nLo)), fAllow, maxForce);
+        return new Cells(dm, nLo, nHi, bound.at(dm, g.coils(bound.fallsWithCoils() ? nHi : nLo)),
+                bound.mass(dm, g.coils(nLo)), fAllow, maxForce);
     }
 
     /**
@@ -184,19 +196,53 @@ final class FamilyScan {
         return good;
     }
 
+    /**
+     * Without a pocket: the largest coil index in [nLo, nHi] whose shortest free length, Ls + (1 + ξ)·x with x the
+     * massless working deflection (a lower bound for a launch), is within the free-length limit (nLo − 1 when none),
+     * by bisection: both terms grow with Na. The caller widens the result by two steps.
+     */
+    private long lastFitting(double dm, long nLo, long nHi) {
+        long good = nLo - 1;
+        long bad = nHi + 1;
+        while (bad - good > 1) {
+            long mid = (good + bad) >>> 1;
+            double na = g.coils(mid);
+            double k = gd4 / (8 * dm * dm * dm * na);
+            double x = arrest != null ? ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(), push, 0)
+                    : LaunchBalance.cockedCompression(k, launch.height(), launch.mass(), 0, launch.angle(),
+                            launch.efficiency());
+            if (f.ends().solidLength(d, f.ends().totalCoils(na)) + (1 + xi) * x <= maxFree * (1 + TIE_SLACK)) {
+                good = mid;
+            } else {
+                bad = mid;
+            }
+        }
+        return good;
+    }
+
     private boolean beaten(double lowerBound) {
         return lowerBound > acc.incumbent() * (1 + TIE_SLACK);
     }
 
+    /**
+     * Whether no design with criterion at least {@code lowerBound} and mass at least {@code massBound} can beat the
+     * incumbent: its criterion is higher, or (for a quantised criterion) it can at best tie and is heavier.
+     */
+    private boolean beaten(double lowerBound, double massBound) {
+        return beaten(lowerBound) || quantum > 0 && lowerBound > acc.incumbent() - quantum / 2
+                && massBound > acc.incumbentMass() * (1 + TIE_SLACK);
+    }
+
     private void searchDiameter(Cells c) {
         if (bound.fallsWithCoils()) {
-            for (long jn = c.nHi(); jn >= c.nLo() && !beaten(bound.at(c.dm(), g.coils(jn))); jn--) {
+            for (long jn = c.nHi(); jn >= c.nLo() && !beaten(bound.at(c.dm(), g.coils(jn))); jn--) { // quantum 0
                 searchCell(c, g.coils(jn));
             }
             return;
         }
         boolean firstWins = Objective.nonDecreasingInCoils(req.ranking().by());
-        for (long jn = c.nLo(); jn <= c.nHi() && !beaten(bound.at(c.dm(), g.coils(jn))); jn++) {
+        for (long jn = c.nLo(); jn <= c.nHi()
+                && !beaten(bound.at(c.dm(), g.coils(jn)), bound.mass(c.dm(), g.coils(jn))); jn++) {
             if (searchCell(c, g.coils(jn)) && firstWins) {
                 return;
             }
@@ -212,7 +258,7 @@ final class FamilyScan {
             return searchPocket(c, na, k, ls);
         }
         long j0 = space.firstFreeLengthIndex(ls);
-        long jCap = g.lengthIndexAtMost(space.freeLengthCap(f, dm, ls, k));
+        long jCap = g.lengthIndexAtMost(space.freeLengthCap(c.solidForce(), ls, k));
         double work = arrest != null
                 ? ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(), arrest.pushForce(), 0)
                 : LaunchBalance.cockedCompression(k, launch.height(), launch.mass(),
@@ -248,8 +294,14 @@ final class FamilyScan {
         if (lo > hi) {
             return false;
         }
+        if (!req.envelope().guided()) {
+            hi = Math.min(hi, g.lengthIndexAtMost(longestUnbuckled(dm, k)) + 1);
+        }
         lo = Math.max(lo, space.firstFreeLengthIndex(ls));
-        hi = Math.min(hi, g.lengthIndexAtMost(space.freeLengthCap(f, dm, ls, k)));
+        hi = Math.min(hi, g.lengthIndexAtMost(space.freeLengthCap(c.solidForce(), ls, k)));
+        if (lo <= hi && !HardLimits.atLeast(g.length(lo), pocket)) {
+            lo++; // the pocket rule exactly as the evaluator applies it
+        }
         if (lo > hi) {
             return false;
         }
@@ -287,6 +339,30 @@ final class FamilyScan {
             found |= acc.offer(limits, dm, na, g.length(j));
         }
         return found;
+    }
+
+    /**
+     * Longest free length at which an unguided spring of rate {@code k} at mean diameter {@code dm} can pass the
+     * buckling check with any preload, m. The total deflection u + x is smallest when the preload equals the push
+     * (d(u + x)/du = (F0 − Fc)/(P − Fc)): T = Fc/k + √(2E/k) for Fc &gt; 0, else the deflection without preload. The
+     * critical deflection y_cr = C1'(L0 − √(L0² − K)), K = C2'·D²/α² (Shigley's MED 9th ed., Eq. 10-10, as in
+     * {@link dev.coilwise.mechanics.Buckling}), falls as L0 grows, so y_cr ≥ T needs L0 ≤ (K + t²)/(2t), t = T/C1',
+     * unless the spring is short enough to be stable outright.
+     */
+    private double longestUnbuckled(double dm, double k) {
+        double e = limits.youngsModulus();
+        double gm = limits.shearModulus();
+        double alpha = req.spring().seating().alpha();
+        double c1 = e / (2 * (e - gm));
+        double kk = 2 * Math.PI * Math.PI * (e - gm) / (2 * gm + e) * dm * dm / (alpha * alpha);
+        double stable = Math.sqrt(kk);
+        if (f.material().steel()) {
+            stable = Math.max(stable, dev.coilwise.mechanics.Buckling.absoluteStabilityLength(dm, req.spring().seating()));
+        }
+        double total = push > 0 ? push / k + Math.sqrt(2 * energy / k)
+                : ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(), push, 0);
+        double t = total / c1 * (1 - TIE_SLACK);
+        return t > 0 ? Math.max(stable, (kk + t * t) / (2 * t)) : Double.POSITIVE_INFINITY;
     }
 
     private double peakAt(double k, long j) {
