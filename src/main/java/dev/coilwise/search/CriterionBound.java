@@ -34,6 +34,13 @@ final class CriterionBound {
     private final Arrest arrest;
     private final Launch launch;
     private final double pocket;
+    private final double push;
+    private final double energy;
+    /** n of the arrest bound: |Fc| without a pocket, max(0, −Fc) with one, N. */
+    private final double slack;
+    private final double eta;
+    private final double lift;
+    private final double kinetic;
 
     CriterionBound(Requirement req, Family family, double shearModulus) {
         this.by = req.ranking().by();
@@ -46,6 +53,13 @@ final class CriterionBound {
         this.launch = req.job() instanceof Launch l ? l : null;
         this.pocket = arrest != null && req.envelope().pocketLength().isPresent()
                 ? req.envelope().pocketLength().getAsDouble() : Double.NaN;
+        this.push = arrest == null ? 0 : arrest.pushForce();
+        this.energy = arrest == null ? 0 : arrest.kineticEnergy();
+        this.slack = Double.isNaN(pocket) ? Math.abs(push) : Math.max(0, -push);
+        this.eta = launch == null ? 1 : launch.efficiency();
+        this.lift = launch == null ? 0 : launch.mass() * Gravity.STANDARD * Math.sin(launch.angle());
+        double v = launch == null ? 0 : launch.requiredExitSpeed();
+        this.kinetic = launch == null ? 0 : 0.5 * launch.mass() * v * v;
     }
 
     /** Whether the bound falls (rather than rises) as active coils are added at a fixed D. */
@@ -68,7 +82,7 @@ final class CriterionBound {
 
     /** The spring mass at mean diameter {@code dm} (m) and {@code na} active coils, kg (the first tie-break). */
     double mass(double dm, double na) {
-        return family.ends().totalCoils(na) * Math.PI * dm * area * family.material().density();
+        return family.ends().totalCoils(na) * Math.PI * dm * area * family.material().density(); // as Spring.mass()
     }
 
     /** The lower bound at mean diameter {@code dm} (m) and {@code na} active coils. */
@@ -76,13 +90,30 @@ final class CriterionBound {
         double d = family.wireDiameter();
         double nt = family.ends().totalCoils(na);
         return switch (by) {
-            case MASS, ROBUSTNESS -> nt * Math.PI * dm * area * family.material().density();
-            case COST -> nt * Math.PI * dm * area * family.material().density() * family.material().relativeCost();
+            case MASS, ROBUSTNESS -> mass(dm, na);
+            case COST -> mass(dm, na) * family.material().relativeCost();
             case SOLID_LENGTH -> family.ends().solidLength(d, nt);
             case OUTER_DIAMETER -> dm + d;
             case FREE_LENGTH -> freeLength(dm, na, family.ends().solidLength(d, nt));
             case PEAK_FORCE -> peakForce(gd4 / (8 * dm * dm * dm * na));
         };
+    }
+
+    /**
+     * A bound for the one cell (D, Na), at least {@link #at}: for a launch, the peak force and the shortest free length
+     * with the spring's own active mass Na·π·D·(πd²/4)·ρ in the balance (the cocking force is then exact). Unlike
+     * {@link #at} it need not move monotonically with Na, so it may skip a cell but not end a loop.
+     */
+    double tight(double dm, double na) {
+        if (launch == null || by != RankBy.PEAK_FORCE && by != RankBy.FREE_LENGTH) {
+            return at(dm, na);
+        }
+        double k = gd4 / (8 * dm * dm * dm * na);
+        double activeMass = na * Math.PI * dm * area * family.material().density(); // as Spring.activeMass()
+        double x = LaunchBalance.cockedCompression(k, launch.height(), launch.mass(), activeMass, launch.angle(),
+                launch.efficiency());
+        return by == RankBy.PEAK_FORCE ? k * x
+                : family.ends().solidLength(family.wireDiameter(), family.ends().totalCoils(na)) + (1 + xi) * x;
     }
 
     private double freeLength(double dm, double na, double ls) {
@@ -91,7 +122,7 @@ final class CriterionBound {
         }
         double k = gd4 / (8 * dm * dm * dm * na);
         double x = arrest != null ? ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(),
-                arrest.pushForce(), 0)
+                push, 0)
                 : LaunchBalance.cockedCompression(k, launch.height(), launch.mass(), 0, launch.angle(),
                         launch.efficiency());
         return ls + (1 + xi) * x;
@@ -99,14 +130,8 @@ final class CriterionBound {
 
     private double peakForce(double k) {
         if (arrest != null) {
-            double fc = arrest.pushForce();
-            double n = Double.isNaN(pocket) ? Math.abs(fc) : Math.max(0, -fc);
-            return fc + Math.sqrt(2 * k * arrest.kineticEnergy() + n * n);
+            return push + Math.sqrt(2 * k * energy + slack * slack);
         }
-        double eta = launch.efficiency();
-        double b = launch.mass() * Gravity.STANDARD * Math.sin(launch.angle());
-        double v = launch.requiredExitSpeed();
-        double c = 0.5 * launch.mass() * v * v;
-        return (b + Math.sqrt(b * b + 2 * eta * k * c)) / eta;
+        return (lift + Math.sqrt(lift * lift + 2 * eta * k * kinetic)) / eta;
     }
 }

@@ -12,6 +12,7 @@ import dev.coilwise.model.Requirement;
 import dev.coilwise.model.SpringOptions;
 import java.util.Arrays;
 import java.util.Comparator;
+import java.util.concurrent.atomic.DoubleAccumulator;
 
 /**
  * The pruned search of one family, confined to one thread (see {@link PrunedSearch} for the method). Mean diameters
@@ -44,12 +45,15 @@ final class FamilyScan {
     private final double stroke;
     private final double maxFree;
     private final double quantum;
+    /** Smallest criterion value met by any family, or null when every family's own best is wanted. */
+    private final DoubleAccumulator leader;
     /** The peak-force and deceleration limits as one force cap, N (+∞ when none). */
     private double forceCap;
     private double lastForce = Double.NaN;
     private RateBounds lastRates;
 
-    private FamilyScan(DesignSpace space, Family f) {
+    private FamilyScan(DesignSpace space, Family f, DoubleAccumulator leader) {
+        this.leader = leader;
         this.space = space;
         this.req = space.requirement();
         this.f = f;
@@ -73,7 +77,16 @@ final class FamilyScan {
 
     /** Searches family {@code f} of {@code space}; returns its best design and counts. */
     static FamilyBest search(DesignSpace space, Family f) {
-        FamilyScan scan = new FamilyScan(space, f);
+        return search(space, f, null);
+    }
+
+    /**
+     * Searches family {@code f}, skipping also every cell whose bound is above {@code leader}, the smallest criterion
+     * value found so far by any family (shared between threads). The family's result is then its best only if that
+     * can beat every other family; the overall best is still found exactly, but counts depend on thread timing.
+     */
+    static FamilyBest search(DesignSpace space, Family f, DoubleAccumulator leader) {
+        FamilyScan scan = new FamilyScan(space, f, leader);
         scan.run();
         return scan.acc;
     }
@@ -108,32 +121,34 @@ final class FamilyScan {
         if (arrest != null && req.limits().deceleration().isPresent()) {
             forceCap = Math.min(forceCap, arrest.mass() * req.limits().deceleration().getAsDouble() + push);
         }
-        Cells[] plan = new Cells[(int) (dHi - dLo + 1)];
+        // Plan: the bound of every diameter, without allocation. Visit best bound first (ties by diameter), so the
+        // incumbent is good early; every diameter's own bound is still compared with it when its turn comes.
+        int size = (int) (dHi - dLo + 1);
+        long[] order = new long[size];
+        double[] bounds = new double[size];
+        double[] masses = new double[size];
+        long[] window = new long[2];
         int n = 0;
-        for (long jd = dLo; jd <= dHi; jd++) {
-            Cells c = cells(g.length(jd), coils);
-            if (c != null) {
-                plan[n++] = c;
+        for (int i = 0; i < size; i++) {
+            double dm = g.length(dLo + i);
+            if (coilWindow(dm, coils, window)) {
+                bounds[i] = bound.at(dm, g.coils(bound.fallsWithCoils() ? window[1] : window[0]));
+                masses[i] = bound.mass(dm, g.coils(window[0]));
+                order[n++] = (long) Float.floatToIntBits((float) bounds[i]) << 32 | i;
             }
         }
-        // Best bound first (then lightest, then smallest diameter), so the incumbent is good early; every diameter's
-        // own bound is still compared with it.
-        Cells[] order = Arrays.copyOf(plan, n);
-        Arrays.sort(order, VISIT_ORDER);
-        for (Cells c : order) {
-            if (!beaten(c.bound(), c.mass())) {
-                searchDiameter(c);
+        Arrays.sort(order, 0, n);
+        lightestFirstAmongTies(order, n, masses);
+        for (int k = 0; k < n; k++) {
+            int i = (int) order[k];
+            if (!beaten(bounds[i], masses[i])) {
+                Cells c = cells(g.length(dLo + i), coils);
+                if (c != null && !beaten(c.bound(), c.mass())) {
+                    searchDiameter(c);
+                }
             }
         }
     }
-
-    private static final Comparator<Cells> VISIT_ORDER = (a, b) -> {
-        int c = Double.compare(a.bound(), b.bound());
-        if (c == 0) {
-            c = Double.compare(a.mass(), b.mass());
-        }
-        return c != 0 ? c : Double.compare(a.dm(), b.dm());
-    };
 
     /**
      * The active-coil window at one mean diameter, with the criterion's bound over it.
@@ -146,14 +161,42 @@ final class FamilyScan {
                          double maxForce) {
     }
 
-    private Cells cells(double dm, long[] coils) {
+    /** Within each run of equal (float) bounds in {@code order}, puts the lighter diameters first. */
+    private static void lightestFirstAmongTies(long[] order, int n, double[] masses) {
+        int start = 0;
+        while (start < n) {
+            int end = start + 1;
+            while (end < n && order[end] >>> 32 == order[start] >>> 32) {
+                end++;
+            }
+            if (end - start > 1) {
+                long high = order[start] & 0xFFFF_FFFF_0000_0000L;
+                long[] run = new long[end - start];
+                for (int k = start; k < end; k++) {
+                    int i = (int) order[k];
+                    run[k - start] = (long) Float.floatToIntBits((float) masses[i]) << 32 | i;
+                }
+                Arrays.sort(run);
+                for (int k = start; k < end; k++) {
+                    order[k] = high | (run[k - start] & 0xFFFF_FFFFL);
+                }
+            }
+            start = end;
+        }
+    }
+
+    /**
+     * The active-coil window at mean diameter {@code dm} from the force cap and {@link RateBounds}, into
+     * {@code window}; false when empty.
+     */
+    private boolean coilWindow(double dm, long[] coils, long[] window) {
         double fAllow = Stress.forceFor(limits.allowableStress(), dm, d);
         double maxForce = Math.min(forceCap, req.spring().solidSafe() ? fAllow / (1 + xi) : fAllow);
         RateBounds rb = maxForce == lastForce ? lastRates : RateBounds.of(req, maxForce * (1 + TIE_SLACK));
         lastForce = maxForce;
         lastRates = rb;
         if (rb.empty()) {
-            return null;
+            return false;
         }
         double naPerRate = gd4 / (8 * dm * dm * dm); // Na = naPerRate / k
         long nLo = coils[0];
@@ -164,6 +207,21 @@ final class FamilyScan {
         if (rb.low() > 0) {
             nHi = Math.min(nHi, (long) Math.ceil(naPerRate / rb.low() / Grid.COIL_STEP) + 1);
         }
+        window[0] = nLo;
+        window[1] = nHi;
+        return nLo <= nHi;
+    }
+
+    /** The cells of one mean diameter: {@link #coilWindow} narrowed by coil bind or the free-length limit. */
+    private Cells cells(double dm, long[] coils) {
+        long[] window = new long[2];
+        if (!coilWindow(dm, coils, window)) {
+            return null;
+        }
+        double fAllow = Stress.forceFor(limits.allowableStress(), dm, d);
+        double maxForce = Math.min(forceCap, req.spring().solidSafe() ? fAllow / (1 + xi) : fAllow);
+        long nLo = window[0];
+        long nHi = window[1];
         if (!Double.isNaN(pocket)) {
             nHi = Math.min(nHi, lastBindable(dm, nLo, nHi) + 2);
         } else if (maxFree < Double.POSITIVE_INFINITY && nLo <= nHi) {
@@ -221,7 +279,17 @@ final class FamilyScan {
     }
 
     private boolean beaten(double lowerBound) {
-        return lowerBound > acc.incumbent() * (1 + TIE_SLACK);
+        double best = leader == null ? acc.incumbent() : Math.min(acc.incumbent(), leader.get());
+        return lowerBound > best * (1 + TIE_SLACK);
+    }
+
+    /** Offers one design to the family (and, when searching for the overall best only, to the shared bound). */
+    private boolean offer(double dm, double na, double l0) {
+        boolean feasible = acc.offer(limits, dm, na, l0);
+        if (feasible && leader != null) {
+            leader.accumulate(acc.incumbent());
+        }
+        return feasible;
     }
 
     /**
@@ -236,13 +304,18 @@ final class FamilyScan {
     private void searchDiameter(Cells c) {
         if (bound.fallsWithCoils()) {
             for (long jn = c.nHi(); jn >= c.nLo() && !beaten(bound.at(c.dm(), g.coils(jn))); jn--) { // quantum 0
-                searchCell(c, g.coils(jn));
+                if (!beaten(bound.tight(c.dm(), g.coils(jn)))) {
+                    searchCell(c, g.coils(jn));
+                }
             }
             return;
         }
         boolean firstWins = Objective.nonDecreasingInCoils(req.ranking().by());
         for (long jn = c.nLo(); jn <= c.nHi()
                 && !beaten(bound.at(c.dm(), g.coils(jn)), bound.mass(c.dm(), g.coils(jn))); jn++) {
+            if (beaten(bound.tight(c.dm(), g.coils(jn)), bound.mass(c.dm(), g.coils(jn)))) {
+                continue;
+            }
             if (searchCell(c, g.coils(jn)) && firstWins) {
                 return;
             }
@@ -271,7 +344,7 @@ final class FamilyScan {
         while (!coilBindHolds(g.length(j), ls, work)) {
             j++;
         }
-        return j <= jCap && acc.offer(limits, dm, na, g.length(j));
+        return j <= jCap && offer(dm, na, g.length(j));
     }
 
     /** The coil-bind rule exactly as the evaluator applies it. */
@@ -309,7 +382,7 @@ final class FamilyScan {
             return searchPocketByPeak(dm, na, k, lo, hi);
         }
         for (long j = lo; j <= hi; j++) {
-            if (acc.offer(limits, dm, na, g.length(j))) {
+            if (offer(dm, na, g.length(j))) {
                 return true; // every other criterion is the same across the cell, and the shorter free length wins ties
             }
         }
@@ -336,7 +409,7 @@ final class FamilyScan {
                 return found;
             }
             long j = takeDown ? down-- : up++;
-            found |= acc.offer(limits, dm, na, g.length(j));
+            found |= offer(dm, na, g.length(j));
         }
         return found;
     }

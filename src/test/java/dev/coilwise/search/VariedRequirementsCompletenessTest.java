@@ -39,6 +39,14 @@ class VariedRequirementsCompletenessTest {
         assertThat(pruned.evaluated()).isLessThanOrEqualTo(brute.evaluated());
     }
 
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("cases")
+    void bestAloneIsTheFirstOfTheFullSearch(String name, Requirement req) {
+        DesignSpace space = DesignSpace.of(req, SearchFixtures.TABLE);
+        SearchResult all = new PrunedSearch().run(space);
+        assertThat(new PrunedSearch().best(space)).isEqualTo(all.best().stream().findFirst());
+    }
+
     @Test
     void mostGeneratedCasesHaveFeasibleDesignsSoTheComparisonsBite() {
         long feasible = CASES.stream()
