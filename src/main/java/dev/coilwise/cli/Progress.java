@@ -10,17 +10,23 @@ final class Progress {
 
     private final PrintWriter err;
     private final boolean terminal;
+    private final long delayNs;
     private final long start = System.nanoTime();
     private boolean drawn;
 
     Progress(PrintWriter err, boolean terminal) {
+        this(err, terminal, DELAY_NS);
+    }
+
+    Progress(PrintWriter err, boolean terminal, long delayNs) {
         this.err = err;
         this.terminal = terminal;
+        this.delayNs = delayNs;
     }
 
     /** Shows that {@code done} of {@code total} steps are finished. */
     void update(int done, int total) {
-        if (!terminal || System.nanoTime() - start < DELAY_NS) {
+        if (!terminal || System.nanoTime() - start < delayNs) {
             return;
         }
         int filled = (int) ((long) WIDTH * done / Math.max(1, total));

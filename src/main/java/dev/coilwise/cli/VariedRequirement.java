@@ -69,6 +69,7 @@ final class VariedRequirement {
             throw new java.io.UncheckedIOException(e);
         }
         Path folder = file.toAbsolutePath().getParent();
-        return reader.parse(text, file.toString(), folder);
+        // Positions in messages then refer to the rewritten text, so name it as such.
+        return reader.parse(text, file + " with " + String.join(".", path) + " = " + valueText, folder);
     }
 }
