@@ -55,9 +55,11 @@ final class SizeCommand extends BaseCommand {
         }
         SizingResult result = new Sizer(table).size(req);
         DisplayUnits du = new DisplayUnits(units == null ? req.units() : units == Units.us ? UnitSystem.US : UnitSystem.SI);
-        String json = ShortlistJson.write(result);
-        String csv = ShortlistCsv.write(result);
-        if (out != null) {
+        // Rendered only when asked for: the JSON writer's start-up alone is a large share of a short run.
+        boolean files = out != null;
+        String json = files || format == Format.json ? ShortlistJson.write(result) : null;
+        String csv = files || format == Format.csv ? ShortlistCsv.write(result) : null;
+        if (files) {
             OutputFolder folder = new OutputFolder(out, List.of(file));
             folder.add("shortlist.json", json);
             folder.add("shortlist.csv", csv);
