@@ -11,20 +11,21 @@ import java.util.List;
  * <ul>
  *   <li>wire diameters: the anchor's preferred wire and {@code wiresEachSide} neighbours on each side in the
  *       requirement's series (every material and end type of the requirement is kept);</li>
- *   <li>the grid step of mean diameter and free length multiplied by {@code stepFactor};</li>
+ *   <li>the grid step of mean diameter and free length made the multiple of the requirement's step nearest to
+ *       {@code step} (m): 0.5 mm is 5 × 0.1 mm for SI requirements and 20 × 0.001 in = 0.508 mm for US ones;</li>
  *   <li>the requirement's spring index range cut to the anchor's index ± {@code indexHalfWidth}, and its active-coil
  *       range to the anchor's count ± {@code coilsHalfWidth} (so the cut requirement is itself a valid one, and
  *       designs outside the cut are infeasible for both searches alike).</li>
  * </ul>
  * Pruned and brute-force searches are then compared on this same space.
  */
-public record ReducedSpace(int wiresEachSide, double stepFactor, double indexHalfWidth, double coilsHalfWidth) {
+public record ReducedSpace(int wiresEachSide, double step, double indexHalfWidth, double coilsHalfWidth) {
 
     /** The cut used by the benchmark (see docs/performance.md). */
-    public static final ReducedSpace BENCHMARK = new ReducedSpace(1, 5, 1.0, 2.5);
+    public static final ReducedSpace BENCHMARK = new ReducedSpace(1, 0.5e-3, 1.0, 2.0);
 
     /** A smaller cut for unit tests. */
-    public static final ReducedSpace TEST = new ReducedSpace(1, 8, 0.75, 1.5);
+    public static final ReducedSpace TEST = new ReducedSpace(1, 0.8e-3, 0.75, 1.5);
 
     /** The reduced space of {@code req} around {@code anchor} (null: the middle of the full space). */
     public DesignSpace of(Requirement req, MaterialTable table, Candidate anchor) {
@@ -46,6 +47,7 @@ public record ReducedSpace(int wiresEachSide, double stepFactor, double indexHal
         Requirement r = new Requirement(req.title(), req.job(), req.limits(), req.envelope(), cut, req.ranking(),
                 req.units(), req.stock());
         List<Family> fams = full.families().stream().filter(f -> kept.contains(f.wireDiameter())).toList();
-        return new DesignSpace(r, new Grid(full.grid().step() * stepFactor), full.materials(), full.ends(), kept, fams);
+        double factor = Math.max(1, Math.round(step / full.grid().step()));
+        return new DesignSpace(r, new Grid(full.grid().step() * factor), full.materials(), full.ends(), kept, fams);
     }
 }
