@@ -45,6 +45,7 @@ final class FamilyScan {
     private final double stroke;
     private final double maxFree;
     private final double quantum;
+    private final FatigueBound fatigue;
     /** Smallest criterion value met by any family, or null when every family's own best is wanted. */
     private final DoubleAccumulator leader;
     /** The peak-force and deceleration limits as one force cap, N (+∞ when none). */
@@ -73,6 +74,7 @@ final class FamilyScan {
         this.stroke = req.limits().stroke();
         this.maxFree = req.envelope().maxFreeLength().orElse(Double.POSITIVE_INFINITY);
         this.quantum = bound.quantum(g);
+        this.fatigue = FatigueBound.of(req, f, f.material().tensileStrength(d));
     }
 
     /** Searches family {@code f} of {@code space}; returns its best design and counts. */
@@ -96,6 +98,9 @@ final class FamilyScan {
         double vLim = Surge.speedLimit(limits.allowableStress(), f.material().density(), limits.shearModulus());
         if (speed > vLim * (1 + 1e-6)) {
             return; // the surge limit depends on the family alone (a launch leaves faster than it is asked to, never slower)
+        }
+        if (fatigue.impossible() && (launch != null || energy > 0 || !f.material().steel())) {
+            return; // the fatigue check gives n = 0 to every design of the family (its working stress range is never 0)
         }
         SpringOptions opt = req.spring();
         long[] dr = g.meanDiameterRange(d, opt);
@@ -192,6 +197,9 @@ final class FamilyScan {
     private boolean coilWindow(double dm, long[] coils, long[] window) {
         double fAllow = Stress.forceFor(limits.allowableStress(), dm, d);
         double maxForce = Math.min(forceCap, req.spring().solidSafe() ? fAllow / (1 + xi) : fAllow);
+        if (Double.isNaN(pocket)) {
+            maxForce = Math.min(maxForce, fatigue.forceCap(Stress.corrected(1, dm, d)));
+        }
         RateBounds rb = maxForce == lastForce ? lastRates : RateBounds.of(req, maxForce * (1 + TIE_SLACK));
         lastForce = maxForce;
         lastRates = rb;
@@ -370,6 +378,17 @@ final class FamilyScan {
         if (!req.envelope().guided()) {
             hi = Math.min(hi, g.lengthIndexAtMost(longestUnbuckled(dm, k)) + 1);
         }
+        if (req.envelope().bore().isPresent()) {
+            hi = Math.min(hi, g.lengthIndexAtMost(longestInBore(dm, na, ls)) + 1);
+        }
+        double[] f0 = fatigue.preloadForces(Stress.corrected(1, dm, d), k, energy, push);
+        if (f0 != null) {
+            lo = Math.max(lo, g.lengthIndexAtLeast(pocket + Math.max(0, f0[0]) / k) - 1);
+            hi = Math.min(hi, g.lengthIndexAtMost(pocket + Math.max(0, f0[1]) / k) + 1);
+            if (f0[1] < 0) {
+                return false;
+            }
+        }
         lo = Math.max(lo, space.firstFreeLengthIndex(ls));
         hi = Math.min(hi, g.lengthIndexAtMost(space.freeLengthCap(c.solidForce(), ls, k)));
         if (lo <= hi && !HardLimits.atLeast(g.length(lo), pocket)) {
@@ -436,6 +455,22 @@ final class FamilyScan {
                 : ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(), push, 0);
         double t = total / c1 * (1 - TIE_SLACK);
         return t > 0 ? Math.max(stable, (kk + t * t) / (2 * t)) : Double.POSITIVE_INFINITY;
+    }
+
+    /**
+     * Longest free length whose outer diameter at solid fits the bore, m: {@link dev.coilwise.mechanics.SolidGrowth}
+     * OD_s = √(D² + (p² − d²)/π²) + d grows with the pitch p, so p² ≤ π²((B − d)² − D²) + d², B the bore less its
+     * clearance, and L0 follows from the pitch as in {@link dev.coilwise.model.Spring#pitch()}.
+     */
+    private double longestInBore(double dm, double na, double ls) {
+        double bore = req.envelope().bore().getAsDouble();
+        double room = (bore - req.envelope().clearance().of(bore)) * (1 + TIE_SLACK) - d;
+        double p2 = Math.PI * Math.PI * (room * room - dm * dm) + d * d;
+        if (room < dm || p2 < 0) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        double p = Math.sqrt(p2);
+        return f.ends() == dev.coilwise.model.EndType.PLAIN_GROUND ? p * f.ends().totalCoils(na) : p * na + ls - na * d;
     }
 
     private double peakAt(double k, long j) {
