@@ -111,18 +111,20 @@ final class SizeCommand extends BaseCommand {
                     + (cat.demo() ? " (demo data)" : "") + (w.isEmpty() ? "" : ", " + w.size() + " warnings (first: "
                     + w.get(0) + ")"));
         }
-        Progress progress = new Progress(err(), "scatter");
+        Progress progress = new Progress(err(), "scatter", System.console() != null);
         SizingOptions options = new SizingOptions(
                 samples == 0 ? Optional.empty() : Optional.of(ScatterSettings.defaults().withSamples(samples).withSeed(seed)),
                 progress, masses == 0 ? Optional.empty() : Optional.of(SimulationOptions.defaults().withMasses(masses)));
         SizingResult result = new Sizer(table, new PrunedSearch(), options).size(req, stock)
                 .withLeadingWarnings(catalogueNotes);
-        progress.close();
+        progress.finish();
         DisplayUnits du = new DisplayUnits(units == null ? req.units() : units == Units.us ? UnitSystem.US : UnitSystem.SI);
-        String json = ShortlistJson.write(result);
-        String csv = ShortlistCsv.write(result);
+        // Rendered only when asked for: the JSON writer's start-up alone is a large share of a short run.
+        boolean files = out != null;
+        String json = files || format == Format.json ? ShortlistJson.write(result) : null;
+        String csv = files || format == Format.csv ? ShortlistCsv.write(result) : null;
         List<String> written = new ArrayList<>();
-        if (out != null) {
+        if (files) {
             OutputFolder folder = new OutputFolder(out, inputs(req));
             folder.add("shortlist.json", json);
             folder.add("shortlist.csv", csv);
