@@ -7,6 +7,8 @@ import dev.coilwise.report.DisplayUnits;
 import dev.coilwise.report.ShortlistCsv;
 import dev.coilwise.report.ShortlistJson;
 import dev.coilwise.report.ShortlistTable;
+import dev.coilwise.report.html.HtmlReportWriter;
+import dev.coilwise.report.html.ReportData;
 import dev.coilwise.requirement.RequirementReader;
 import dev.coilwise.search.Sizer;
 import dev.coilwise.search.SizingResult;
@@ -20,7 +22,7 @@ import picocli.CommandLine.Parameters;
 @Command(name = "size", header = "Search the design space of a requirement file and rank the feasible springs.",
         description = "Reads FILE, searches materials, end types, wire and coil diameters, active coils and free"
             + " lengths, keeps the designs that meet every limit and prints the shortlist. With --out, writes"
-            + " shortlist.csv and shortlist.json to DIR.")
+            + " shortlist.csv, shortlist.json and report.html (a self-contained page with charts) to DIR.")
 final class SizeCommand extends BaseCommand {
     enum Format { table, csv, json }
 
@@ -29,7 +31,7 @@ final class SizeCommand extends BaseCommand {
     @Parameters(paramLabel = "FILE", description = "The requirement file (YAML).")
     Path file;
 
-    @Option(names = "--out", paramLabel = "DIR", description = "Folder to write shortlist.csv and shortlist.json into.")
+    @Option(names = "--out", paramLabel = "DIR", description = "Folder to write shortlist.csv, shortlist.json and report.html into.")
     Path out;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "table",
@@ -61,6 +63,7 @@ final class SizeCommand extends BaseCommand {
             OutputFolder folder = new OutputFolder(out, List.of(file));
             folder.add("shortlist.json", json);
             folder.add("shortlist.csv", csv);
+            folder.add("report.html", HtmlReportWriter.write(ReportData.parse(json)));
             folder.commit();
         }
         switch (format) {
@@ -69,7 +72,7 @@ final class SizeCommand extends BaseCommand {
             default -> {
                 out().print(ShortlistTable.write(result, du));
                 if (out != null) {
-                    out().println("Wrote shortlist.csv and shortlist.json to " + out);
+                    out().println("Wrote shortlist.csv, shortlist.json and report.html to " + out);
                 }
             }
         }

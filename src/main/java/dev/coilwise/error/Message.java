@@ -56,7 +56,13 @@ public enum Message {
     LIST_EMPTY("must list at least one %s", 1),
     LOW_ABOVE_HIGH("the low end %s exceeds the high end %s", 2),
     STOCK_NOT_FOUND("file not found: %s", 1),
-    NO_ACTIVE_COILS("'%s' total coils leave no active coils with %s ends (%d inactive coils)", 3);
+    NO_ACTIVE_COILS("'%s' total coils leave no active coils with %s ends (%d inactive coils)", 3),
+
+    // Saved shortlists read back by `coilwise report` (dev.coilwise.report.html).
+    JSON_SYNTAX("not valid JSON: %s", 1),
+    NOT_A_SHORTLIST("not a coilwise shortlist (format is %s); give the shortlist.json that 'coilwise size --out' writes", 1),
+    SHORTLIST_VERSION("shortlist format version %s is not supported; this coilwise reads version %d", 2),
+    SAVED_FIELD("%s is %s; expected %s", 3);
 
     private final String template;
     private final int arity;

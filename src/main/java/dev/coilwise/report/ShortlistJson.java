@@ -46,6 +46,7 @@ public final class ShortlistJson {
         for (ShortlistEntry e : r.shortlist()) {
             designs.add(design(e));
         }
+        root.set("feasible_families", families(r.search()));
         if (r.diagnosis().isPresent()) {
             root.set("diagnosis", diagnosis(r.diagnosis().get(), r.requirement()));
         }
@@ -128,6 +129,29 @@ public final class ShortlistJson {
         n.put("feasible", s.feasibleSeen());
         n.put("feasible_families", s.best().size());
         return n;
+    }
+
+    /**
+     * The best design of every family that has a feasible one, in ranking order (the shortlist is the head of this
+     * list): a few figures each, enough to draw the trade-off between families without searching again.
+     */
+    static ArrayNode families(SearchResult s) {
+        ArrayNode arr = Json.MAPPER.createArrayNode();
+        for (int i = 0; i < s.best().size(); i++) {
+            Evaluation e = s.best().get(i).evaluation();
+            Spring sp = e.spring();
+            ObjectNode o = arr.addObject();
+            o.put("rank", i + 1);
+            o.put("material", sp.material().key());
+            o.put("ends", sp.ends().key());
+            Json.put(o, "wire_diameter_mm", sp.wireDiameter() * 1e3);
+            Json.put(o, "outer_diameter_mm", sp.outerDiameter() * 1e3);
+            Json.put(o, "free_length_mm", sp.freeLength() * 1e3);
+            Json.put(o, "solid_length_mm", sp.solidLength() * 1e3);
+            Json.put(o, "mass_g", e.mass() * 1e3);
+            Json.put(o, "arrest".equals(e.job()) ? "peak_force_N" : "cocking_force_N", e.peakForce());
+        }
+        return arr;
     }
 
     static ObjectNode design(ShortlistEntry entry) {
