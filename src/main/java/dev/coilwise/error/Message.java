@@ -5,23 +5,25 @@ import java.util.Locale;
 /**
  * Every message template of the library in one place. Each names the quantity, the value found and what is allowed.
  * Placeholders are {@link String#format} specifiers; {@code MessageTest} checks their count against {@link #arity()}.
+ * A unit placeholder follows its number directly: callers pass the unit with its leading blank (see {@code Check}).
  */
 public enum Message {
     NOT_FINITE("%s must be a finite number, got %s", 2),
-    NOT_POSITIVE("%s must be a finite number greater than zero, got %s %s", 3),
-    NEGATIVE("%s must be a finite number of zero or more, got %s %s", 3),
-    OUT_OF_RANGE("%s must lie between %s and %s %s, got %s %s", 6),
+    NOT_POSITIVE("%s must be a finite number greater than zero, got %s%s", 3),
+    NEGATIVE("%s must be a finite number of zero or more, got %s%s", 3),
+    OUT_OF_RANGE("%s must lie between %s and %s%s, got %s%s", 6),
     MISSING("%s is required", 1),
     WIRE_OUT_OF_MATERIAL_RANGE("wire diameter %.3f mm is outside the range of %s (%.3f to %.3f mm); coilwise does not extrapolate a material fit", 4),
     UNKNOWN_MATERIAL("unknown material '%s'; known materials: %s", 2),
     UNKNOWN_KEY("unknown %s '%s'; allowed: %s", 3),
     INDEX_TOO_LOW("spring index C = D/d must exceed 0.75 for the curvature factor to be defined, got %s", 1),
+    SPRING_INDEX_TOO_LOW("spring index C = D/d must exceed 1 (the inner diameter D - d must be positive), got %s", 1),
     WAHL_INDEX_TOO_LOW("spring index C = D/d must exceed 1 for the Wahl factor to be defined, got %s", 1),
     SOLID_EXCEEDS_FREE("free length %.3f mm must exceed the solid length %.3f mm", 2),
     NO_SEPARATION("the spring cannot throw the payload: stored energy %.4g J does not exceed the work against gravity over the stroke", 1),
 
     // Requirement and spring files (dev.coilwise.requirement). InputProblem adds the file, line, column and key.
-    PROBLEMS_IN_FILE("%d problem(s) in %s:%n%s", 3),
+    PROBLEMS_IN_FILE("%d problem(s) in %s:", 2),
     TOO_MANY_PROBLEMS("more than %d problems; the rest are not listed", 1),
     FILE_TOO_LARGE("the file has %d bytes; coilwise reads files of at most %d bytes (1 MiB)", 2),
     FILE_UNREADABLE("cannot read the file: %s", 1),
@@ -58,6 +60,15 @@ public enum Message {
     STOCK_NOT_FOUND("file not found: %s", 1),
     NO_ACTIVE_COILS("'%s' total coils leave no active coils with %s ends (%d inactive coils)", 3),
 
+    // Stock catalogues (dev.coilwise.catalog).
+    CATALOG_MAPPING_INVALID("%s: the column mapping has %d problem(s):%n%s", 3),
+    CATALOG_MISSING_FIELD("no column for %s (%s); expected one of: %s", 3),
+    CATALOG_EMPTY_VALUE("%s is required but the cell is empty", 1),
+    CATALOG_BAD_NUMBER("%s must be a number in %s, got '%s'", 3),
+    CATALOG_RAGGED_ROW("row has %d fields but the header has %d", 2),
+    CATALOG_STATED_DIFFERS("stated %s %.4g %s differs from the computed %.4g %s by %.0f %% (more than %.0f %%); the part is evaluated with the computed value", 7),
+    CATALOG_INVALID("%s: %d error(s); nothing was imported (fix the rows, or read the catalogue leniently to skip them):%n%s", 3),
+
     // Saved shortlists read back by `coilwise report` (dev.coilwise.report.html).
     JSON_SYNTAX("not valid JSON: %s", 1),
     NOT_A_SHORTLIST("not a coilwise shortlist (format is %s); give the shortlist.json that 'coilwise size --out' writes", 1),
@@ -80,11 +91,11 @@ public enum Message {
         return arity;
     }
 
-    /** The filled-in message; trailing blanks (an empty unit at the end) are stripped. */
+    /** The filled-in message. */
     public String format(Object... args) {
         if (args.length != arity) {
             throw new InternalFaultException("message " + name() + " takes " + arity + " arguments, got " + args.length);
         }
-        return String.format(Locale.ROOT, template, args).strip();
+        return String.format(Locale.ROOT, template, args);
     }
 }

@@ -2,6 +2,7 @@ package dev.coilwise.report;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.coilwise.dynamics.SimulationSummary;
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.mechanics.Margin;
 import dev.coilwise.model.Arrest;
@@ -16,6 +17,7 @@ import dev.coilwise.search.NearMiss;
 import dev.coilwise.search.SearchResult;
 import dev.coilwise.search.ShortlistEntry;
 import dev.coilwise.search.SizingResult;
+import dev.coilwise.tolerance.TestPoint;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 
@@ -43,8 +45,9 @@ public final class ShortlistJson {
         root.set("requirement", requirement(r.requirement()));
         root.set("search", search(r.search()));
         ArrayNode designs = root.putArray("designs");
+        int grade = r.requirement().spring().toleranceGrade();
         for (ShortlistEntry e : r.shortlist()) {
-            designs.add(design(e));
+            designs.add(design(e, grade));
         }
         root.set("feasible_families", families(r.search()));
         if (r.diagnosis().isPresent()) {
@@ -108,11 +111,15 @@ public final class ShortlistJson {
         sp.put("seating", o.seating().key());
         sp.put("wire_series", req.wireSeries().name().toLowerCase(java.util.Locale.ROOT));
         Json.put(sp, "cycles", o.cycles().orElse(Double.NaN));
+        Json.put(sp, "fatigue_margin", o.fatigueMargin());
         sp.put("shot_peened", o.shotPeened());
         sp.put("tolerance_grade", o.toleranceGrade());
         ObjectNode rk = n.putObject("ranking");
         rk.put("by", req.ranking().by().key());
         rk.put("shortlist", req.ranking().shortlist());
+        rk.put("prefer", req.ranking().prefer().name().toLowerCase(java.util.Locale.ROOT));
+        rk.put("dynamics", req.ranking().dynamicsStrict() ? "strict" : "warn");
+        Json.put(rk, "min_probability", req.ranking().minProbability().orElse(Double.NaN));
         return n;
     }
 
@@ -154,12 +161,22 @@ public final class ShortlistJson {
         return arr;
     }
 
-    static ObjectNode design(ShortlistEntry entry) {
+    static ObjectNode design(ShortlistEntry entry, int grade) {
         Evaluation e = entry.evaluation();
         Spring s = e.spring();
         ObjectNode n = Json.MAPPER.createObjectNode();
         n.put("rank", entry.rank());
-        n.put("source", "custom");
+        n.put("source", entry.candidate().isStock() ? "stock" : "custom");
+        entry.candidate().stock().ifPresent(p -> {
+            n.put("part_number", p.partNumber());
+            n.put("supplier", p.supplier());
+            Json.put(n, "unit_price", p.unitPrice());
+            n.put("currency", p.currency());
+            n.put("pack_quantity", p.packQuantity());
+            n.put("catalogue_row", p.source());
+            ArrayNode flags = n.putArray("catalogue_flags");
+            p.flags().forEach(f -> flags.add(f.toString()));
+        });
         n.put("material", s.material().key());
         n.put("material_standard", s.material().standard());
         n.put("ends", s.ends().key());
@@ -203,8 +220,61 @@ public final class ShortlistJson {
             n.put("binding_limit", b.key());
             Json.put(n, "binding_margin_pct", b.value() * 100);
         });
+        e.fatigue().ifPresent(f -> {
+            ObjectNode fn = n.putObject("fatigue");
+            Json.put(fn, "safety_factor", f.safetyFactor());
+            fn.put("criterion", f.criterion());
+            Json.put(fn, "stress_amplitude_MPa", f.stressAmplitude() * 1e-6);
+            Json.put(fn, "stress_mean_MPa", f.stressMean() * 1e-6);
+        });
+        entry.scatter().ifPresent(sc -> {
+            ObjectNode sn = n.putObject("scatter");
+            sn.put("samples", sc.samples());
+            sn.put("seed", sc.seed());
+            Json.put(sn, "probability_ok", sc.probabilityOk());
+            ObjectNode p01 = sn.putObject("p01");
+            sc.p01().forEach((k, v) -> Json.put(p01, k, v));
+            ObjectNode p99 = sn.putObject("p99");
+            sc.p99().forEach((k, v) -> Json.put(p99, k, v));
+        });
+        ArrayNode loads = n.putArray("test_loads");
+        for (TestPoint tp : TestLoads.of(e, grade)) {
+            ObjectNode t = loads.addObject();
+            t.put("name", tp.name());
+            Json.put(t, "length_mm", tp.length() * 1e3);
+            Json.put(t, "force_N", tp.force());
+            Json.put(t, "force_tolerance_N", tp.forceTolerance());
+            t.put("grade", tp.grade());
+        }
+        entry.simulation().ifPresent(sim -> n.set("simulation", simulation(sim, "arrest".equals(e.job()))));
         n.set("margins", margins(e));
         return n;
+    }
+
+    static ObjectNode simulation(SimulationSummary sim, boolean arrest) {
+        ObjectNode s = Json.MAPPER.createObjectNode();
+        s.put("masses", sim.masses());
+        Json.put(s, "max_compression_mm", sim.maxCompression() * 1e3);
+        Json.put(s, "peak_force_N", sim.peakForce());
+        Json.put(s, "peak_stress_MPa", sim.peakStress() * 1e-6);
+        s.put("coil_clash", sim.coilClash());
+        if (sim.coilClash()) {
+            Json.put(s, "first_clash_ms", sim.firstClashTime() * 1e3);
+            s.put("first_clash_element", sim.firstClashElement());
+        }
+        Json.put(s, "deviation_pct", sim.deviationPct());
+        if (arrest) {
+            Json.put(s, "stop_time_ms", sim.stopTime() * 1e3);
+            Json.put(s, "rebound_speed_m_per_s", sim.reboundSpeed());
+        } else {
+            Json.put(s, "exit_speed_m_per_s", sim.exitSpeed());
+            Json.put(s, "apex_mm", sim.apex() * 1e3);
+        }
+        ArrayNode flags = s.putArray("flags");
+        sim.flags().forEach(flags::add);
+        ArrayNode notes = s.putArray("notes");
+        sim.notes().forEach(notes::add);
+        return s;
     }
 
     static ArrayNode margins(Evaluation e) {

@@ -39,12 +39,30 @@ public final class ShortlistTable {
                     for (NearMiss m : d.nearest()) {
                         Spring s = m.evaluation().spring();
                         sb.append("  ").append(s.material().key()).append(' ').append(s.ends().key())
-                                .append(" d ").append(u.lenWithUnit(s.wireDiameter())).append(", OD ")
+                                .append(" d ").append(u.wireWithUnit(s.wireDiameter())).append(", OD ")
                                 .append(u.lenWithUnit(s.outerDiameter())).append(": ")
                                 .append(Relaxation.describe(m.violated(), r.requirement(), u)).append('\n');
                     }
                 }
             });
+        }
+        r.shortlist().stream().filter(en -> en.candidate().isStock()).forEach(en -> {
+            var p = en.candidate().stock().get();
+            sb.append(en.rank()).append("S = stock part ").append(p.partNumber()).append(" from ").append(p.supplier())
+                    .append(DisplayUnits.fmt(", %.2f %s each", p.unitPrice(), p.currency())).append('\n');
+        });
+        if (r.shortlist().stream().anyMatch(en -> en.simulation().isPresent())) {
+            sb.append("sim dev: largest difference of the time-domain simulation (a spring with mass) from the energy"
+                    + " balance; 'clash' = coils touched during the event.\n");
+        }
+        r.shortlist().stream().filter(en -> en.scatter().isPresent()).findFirst().ifPresent(en -> sb.append(
+                DisplayUnits.fmt("P ok: share of %d springs made to EN 15800 grade %d tolerances (seeded Monte Carlo)"
+                        + " that still meet every limit.%n", en.scatter().get().samples(),
+                        r.requirement().spring().toleranceGrade())));
+        if (r.shortlist().stream().anyMatch(en -> en.scatter().map(sc -> sc.probabilityOk() < 0.5).orElse(false))
+                && r.requirement().ranking().minProbability().isEmpty()) {
+            sb.append("Designs ranked first sit on their binding limit, so many springs made to tolerance miss it: for"
+                    + " margin, rank by robustness (ranking.by: robustness) or set ranking.min_probability.\n");
         }
         if (!r.warnings().isEmpty()) {
             sb.append("\nNotes:\n");
@@ -97,17 +115,20 @@ public final class ShortlistTable {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"#", "material", "ends", "d " + l, "OD " + l, "Na", "L0 " + l, "Ls " + l,
             "rate " + u.rateUnit(), (arrest ? "x_max " : "x_cock ") + l, (arrest ? "F_peak " : "F_cock ") + u.forceUnit(),
-            arrest ? "decel gn" : "H " + l, "mass " + u.springMassUnit(), "binding limit"});
+            arrest ? "decel gn" : "H " + l, "mass " + u.springMassUnit(), "P ok", "sim dev", "binding limit"});
         for (ShortlistEntry en : r.shortlist()) {
             Evaluation e = en.evaluation();
             Spring s = e.spring();
-            rows.add(new String[] {String.valueOf(en.rank()), s.material().key(), s.ends().key(),
+            rows.add(new String[] {en.rank() + (en.candidate().isStock() ? "S" : ""), s.material().key(), s.ends().key(),
                 u.us() ? DisplayUnits.fmt("%.4f", u.length(s.wireDiameter())) : DisplayUnits.fmt("%.2f", u.length(s.wireDiameter())),
                 u.len(s.outerDiameter()), DisplayUnits.fmt("%.2f", s.activeCoils()), u.len(s.freeLength()),
                 u.len(s.solidLength()), DisplayUnits.sig(u.rate(e.rate())), u.len(e.workingDeflection()),
                 DisplayUnits.sig(u.force(e.peakForce())),
                 arrest ? DisplayUnits.sig(DisplayUnits.gn(e.peakDeceleration())) : u.len(e.predictedHeight()),
                 DisplayUnits.sig(u.springMass(e.mass())),
+                en.scatter().map(sc -> DisplayUnits.fmt("%.1f%%", sc.probabilityOk() * 100)).orElse("-"),
+                en.simulation().map(sim -> DisplayUnits.fmt("%+.1f%%", sim.deviationPct())
+                        + (sim.coilClash() ? " clash" : "")).orElse("-"),
                 e.binding().map(b -> b.key() + " " + DisplayUnits.fmt("%+.1f%%", b.value() * 100)).orElse("")});
         }
         int[] w = new int[rows.get(0).length];

@@ -3,6 +3,7 @@ package dev.coilwise.requirement;
 import dev.coilwise.error.Message;
 import dev.coilwise.model.UnitSystem;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 
 /**
@@ -46,7 +47,7 @@ final class Problems {
     void throwIfAny() {
         if (!list.isEmpty()) {
             List<InputProblem> sorted = new ArrayList<>(list);
-            sorted.sort(java.util.Comparator.comparingInt(InputProblem::line).thenComparingInt(InputProblem::column));
+            sorted.sort(Comparator.comparingInt(InputProblem::line).thenComparingInt(InputProblem::column));
             throw new RequirementException(file, sorted);
         }
     }

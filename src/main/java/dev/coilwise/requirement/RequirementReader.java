@@ -38,7 +38,7 @@ public final class RequirementReader {
         Problems problems = new Problems(file.toString());
         Optional<String> text = FileText.read(file, problems);
         problems.throwIfAny();
-        return parse(text.orElseThrow(), problems, FileText.folderOf(file), titleOf(file));
+        return parse(text.orElseThrow(), problems, FileText.folderOf(file), titleOf(file.toString()));
     }
 
     /**
@@ -49,7 +49,7 @@ public final class RequirementReader {
      */
     public Requirement parse(String yamlText, String fileNameForMessages, Path baseDirForStockPaths) {
         Path base = baseDirForStockPaths == null ? Path.of("").toAbsolutePath() : baseDirForStockPaths;
-        return parse(yamlText, new Problems(fileNameForMessages), base, titleOf(Path.of(fileNameForMessages)));
+        return parse(yamlText, new Problems(fileNameForMessages), base, titleOf(fileNameForMessages));
     }
 
     private Requirement parse(String text, Problems problems, Path base, String defaultTitle) {
@@ -83,9 +83,9 @@ public final class RequirementReader {
         return part.orElseThrow(() -> new InternalFaultException("requirement reader: no " + name + " and no problem reported"));
     }
 
-    private static String titleOf(Path file) {
-        Path name = file.getFileName();
-        String n = name == null ? "" : name.toString();
+    /** The file name without folders and extension; works on labels such as {@code <stdin>} that are no path. */
+    private static String titleOf(String fileName) {
+        String n = fileName.substring(Math.max(fileName.lastIndexOf('/'), fileName.lastIndexOf('\\')) + 1);
         int dot = n.lastIndexOf('.');
         return dot > 0 ? n.substring(0, dot) : n;
     }

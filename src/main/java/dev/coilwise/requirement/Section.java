@@ -6,10 +6,14 @@ import dev.coilwise.requirement.YamlNode.Mapping;
 import dev.coilwise.requirement.YamlNode.Position;
 import dev.coilwise.requirement.YamlNode.Scalar;
 import dev.coilwise.requirement.YamlNode.Sequence;
+import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Supplier;
+import java.util.stream.Collectors;
 
 /**
  * Typed, position-aware access to one mapping of a file (the top level or a section such as {@code limits}). Every
@@ -24,7 +28,7 @@ final class Section {
     private final Mapping map;
     private final Position where;
     private final Problems problems;
-    private final java.util.Map<String, Optional<Section>> children = new java.util.HashMap<>();
+    private final Map<String, Optional<Section>> children = new HashMap<>();
 
     Section(String path, Mapping map, Position where, Problems problems, List<String> allowed) {
         this.path = path;
@@ -128,8 +132,8 @@ final class Section {
 
     /** A quantity of any of {@code kinds}, with the kind it turned out to be. */
     Optional<Quantities.Measured> measured(String name, Sign sign, QuantityKind... kinds) {
-        String expected = java.util.Arrays.stream(kinds).map(k -> k.description() + " such as " + k.examples())
-                .collect(java.util.stream.Collectors.joining(" or "));
+        String expected = Arrays.stream(kinds).map(k -> k.description() + " such as " + k.examples())
+                .collect(Collectors.joining(" or "));
         return node(name).flatMap(n -> scalarOf(n, key(name), expected)).flatMap(s -> measuredOf(s, key(name), sign, kinds));
     }
 

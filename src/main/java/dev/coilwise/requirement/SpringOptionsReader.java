@@ -26,6 +26,9 @@ final class SpringOptionsReader {
     /** Bounds on the clash allowance (fraction), cycles, fatigue margin: those of {@link SpringOptions}. */
     static final double CLASH_MAX = 2, CYCLES_MIN = 1, CYCLES_MAX = 1e10, MARGIN_MIN = 0.5, MARGIN_MAX = 5;
 
+    private static final List<String> END_TYPES = Arrays.stream(EndType.values()).map(EndType::key).toList();
+    private static final List<String> SEATINGS = Arrays.stream(Seating.values()).map(Seating::key).toList();
+
     private SpringOptionsReader() {
     }
 
@@ -48,7 +51,7 @@ final class SpringOptionsReader {
         double clash = s.has("clash_allowance") ? s.fraction("clash_allowance", 0, CLASH_MAX).orElse(Double.NaN) : d.clashAllowance();
         boolean solidSafe = s.has("solid_safe") ? s.flag("solid_safe").orElse(true) : d.solidSafe();
         boolean setRemoved = s.has("set_removed") ? s.flag("set_removed").orElse(false) : d.setRemoved();
-        Seating seating = s.has("seating") ? s.choice("seating", keys(Seating.values())).map(Seating::fromKey).orElse(null)
+        Seating seating = s.has("seating") ? s.choice("seating", SEATINGS).map(Seating::fromKey).orElse(null)
                 : d.seating();
         Optional<WireSeries> series = s.has("wire_series")
                 ? s.choice("wire_series", List.of("metric", "inch")).map(w -> WireSeries.valueOf(w.toUpperCase(Locale.ROOT)))
@@ -88,7 +91,7 @@ final class SpringOptionsReader {
     }
 
     private static List<EndType> ends(Section s) {
-        List<String> allowed = keys(EndType.values());
+        List<String> allowed = END_TYPES;
         List<EndType> ends = new ArrayList<>();
         s.items("ends", "a list of end types such as [closed-ground, closed]").ifPresent(items -> {
             for (YamlNode n : items) {
@@ -129,7 +132,4 @@ final class SpringOptionsReader {
         return n instanceof YamlNode.Sequence seq ? "a list of " + seq.items().size() : n.describe();
     }
 
-    private static List<String> keys(Enum<?>[] values) {
-        return Arrays.stream(values).map(v -> v instanceof EndType e ? e.key() : ((Seating) v).key()).toList();
-    }
 }

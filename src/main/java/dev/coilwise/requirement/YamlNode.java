@@ -1,5 +1,7 @@
 package dev.coilwise.requirement;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -40,7 +42,7 @@ sealed interface YamlNode permits YamlNode.Scalar, YamlNode.Mapping, YamlNode.Se
     /** A mapping in file order. */
     record Mapping(Map<String, Entry> entries, Position position) implements YamlNode {
         public Mapping {
-            entries = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(entries));
+            entries = Collections.unmodifiableMap(new LinkedHashMap<>(entries));
         }
 
         @Override
