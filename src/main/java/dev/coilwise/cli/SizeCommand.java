@@ -116,7 +116,8 @@ final class SizeCommand extends BaseCommand {
         Progress progress = new Progress(err(), "scatter");
         SizingOptions options = new SizingOptions(
                 samples == 0 ? Optional.empty() : Optional.of(ScatterSettings.defaults().withSamples(samples).withSeed(seed)),
-                progress, masses == 0 ? Optional.empty() : Optional.of(SimulationOptions.defaults().withMasses(masses)));
+                progress, masses == 0 ? Optional.empty()
+                        : Optional.of(SimulationOptions.defaults().withMasses(masses).withHistory(true)));
         SizingResult result = new Sizer(table, new PrunedSearch(), options).size(req, stock)
                 .withLeadingWarnings(catalogueNotes);
         progress.close();

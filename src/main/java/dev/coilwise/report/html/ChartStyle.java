@@ -15,6 +15,7 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;
 import org.jfree.chart.StandardChartTheme;
 import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.AbstractRenderer;
 import org.jfree.chart.title.LegendTitle;
@@ -50,6 +51,7 @@ final class ChartStyle {
     static final String FONT = "SansSerif";
 
     static final Stroke SOLID = new BasicStroke(2.5f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    static final Stroke SOLID_THIN = new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
     static final Stroke THICK = new BasicStroke(3.5f);
     static final Stroke THIN = new BasicStroke(1.2f);
     static final Stroke DASHED = dash(1.6f, 7, 4);
@@ -77,6 +79,16 @@ final class ChartStyle {
         return new Rectangle2D.Double(-size / 2, -size / 2, size, size);
     }
 
+    static Shape triangle(double size) {
+        Path2D.Double p = new Path2D.Double();
+        double h = size / 2;
+        p.moveTo(0, -h);
+        p.lineTo(h, h);
+        p.lineTo(-h, h);
+        p.closePath();
+        return p;
+    }
+
     static Shape diamond(double size) {
         Path2D.Double p = new Path2D.Double();
         double h = size / 2;
@@ -97,7 +109,13 @@ final class ChartStyle {
      * kept (a chart theme would otherwise replace them with its defaults).
      */
     static void apply(JFreeChart chart) {
-        if (chart.getPlot() instanceof XYPlot xy) {
+        if (chart.getPlot() instanceof CombinedDomainXYPlot combined) {
+            for (XYPlot sub : combined.getSubplots()) {
+                for (int i = 0; i < sub.getRendererCount(); i++) {
+                    keepSeriesLook(sub.getRenderer(i));
+                }
+            }
+        } else if (chart.getPlot() instanceof XYPlot xy) {
             for (int i = 0; i < xy.getRendererCount(); i++) {
                 keepSeriesLook(xy.getRenderer(i));
             }

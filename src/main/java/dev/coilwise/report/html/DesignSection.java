@@ -11,7 +11,7 @@ import java.util.List;
 /**
  * One shortlisted design: what to order, its working figures, its force–deflection chart and its margins. Each design
  * starts a new page in print. Charts that only some designs have (a simulated time history) are added in
- * {@link #optionalFigures}.
+ * {@link #optionalFigures}. Stock parts, fatigue, scatter and simulation figures are shown when saved.
  */
 final class DesignSection {
     private DesignSection() {
@@ -22,8 +22,40 @@ final class DesignSection {
     }
 
     static String heading(ReportDesign d) {
-        return "Design " + d.rank() + ": " + d.material() + (d.materialStandard().isEmpty() ? "" : " (" + d.materialStandard() + ")")
-                + ", " + d.ends() + " ends";
+        String what = d.material() + (d.materialStandard().isEmpty() ? "" : " (" + d.materialStandard() + ")") + ", "
+                + d.ends() + " ends";
+        return "Design " + d.rank() + ": " + d.stock().map(s -> "stock part " + s.partNumber()
+                + (s.supplier().isEmpty() ? "" : " from " + s.supplier()) + ", " + what).orElse(what);
+    }
+
+    /** Figures from the checks beyond the massless balance: fatigue, manufacturing scatter, simulation. */
+    static List<Fact> checks(ReportData r, ReportDesign d) {
+        DisplayUnits u = r.display();
+        List<Fact> f = new ArrayList<>();
+        d.stock().filter(s -> Double.isFinite(s.unitPrice())).ifPresent(s -> f.add(new Fact("unit price",
+                fmt("%.2f", s.unitPrice()) + " " + s.currency())));
+        if (!Double.isNaN(d.fatigueFactor())) {
+            f.add(new Fact("fatigue safety factor", fmt("%.2f", d.fatigueFactor())));
+        }
+        if (!Double.isNaN(d.probabilityOk())) {
+            f.add(new Fact("made to tolerance, share meeting every limit", fmt("%.1f %%", d.probabilityOk() * 100)));
+        }
+        d.simulation().ifPresent(s -> {
+            f.add(new Fact("simulated peak force", u.forceWithUnit(s.peakForce())));
+            f.add(new Fact(r.arrest() ? "simulated largest compression" : "simulated cocked compression",
+                    u.lenWithUnit(s.maxCompression())));
+            f.add(new Fact("simulated peak stress", u.stressWithUnit(s.peakStress())));
+            f.add(new Fact("largest difference from the balance", fmt("%.1f %%", s.deviationPct())));
+            f.add(new Fact("coil clash", s.coilClash() ? fmt("yes, first at %.2f ms", s.firstClashTime() * 1e3) : "no"));
+            if (r.arrest()) {
+                f.add(new Fact("time to stop the load", fmt("%.2f ms", s.stopTime() * 1e3)));
+                f.add(new Fact("rebound speed", sig(u.speed(s.reboundSpeed())) + " " + u.speedUnit()));
+            } else {
+                f.add(new Fact("simulated exit speed", sig(u.speed(s.exitSpeed())) + " " + u.speedUnit()));
+                f.add(new Fact("simulated apex rise", u.lenWithUnit(s.apex())));
+            }
+        });
+        return f;
     }
 
     static List<Fact> geometry(ReportData r, ReportDesign d) {
@@ -83,16 +115,36 @@ final class DesignSection {
         h.open("div", "class=\"facts\"");
         facts(h, "What to order", geometry(r, d));
         facts(h, "Working figures (massless energy balance)", working(r, d));
+        List<Fact> checks = checks(r, d);
+        if (!checks.isEmpty()) {
+            facts(h, d.simulation().map(s -> "Checks: fatigue, scatter, simulation with " + s.masses() + " masses")
+                    .orElse("Checks: fatigue and manufacturing scatter"), checks);
+        }
+        if (!d.testLoads().isEmpty()) {
+            facts(h, "Test loads for the spring maker (EN 15800 grade " + d.testLoads().get(0).grade() + ")",
+                    d.testLoads().stream().map(t -> new Fact(t.name() + " at length " + r.display().lenWithUnit(t.length()),
+                            r.display().forceWithUnit(t.force()) + " \u00b1 " + r.display().forceWithUnit(t.tolerance())))
+                            .toList());
+        }
         h.close("div");
+        d.simulation().ifPresent(s -> {
+            if (!s.flags().isEmpty() || !s.notes().isEmpty()) {
+                h.open("ul", "class=\"notes\"");
+                s.flags().forEach(x -> h.el("li", "Simulation warning: " + x));
+                s.notes().forEach(x -> h.el("li", "Simulation note: " + x));
+                h.close("ul");
+            }
+        });
         h.figure("force-deflection", ForceDeflectionChart.svg(r, d, id + "-fd"), ForceDeflectionChart.caption(r, d));
         h.figure("margins", MarginChart.svg(r, d, id + "-margins"), MarginChart.caption(r, d));
         optionalFigures(h, r, d, id);
         h.close("section");
     }
 
-    /** The charts a design has only when their data was saved. */
+    /** The charts a design has only when their data was saved: the simulated time history. */
     static void optionalFigures(Html h, ReportData r, ReportDesign d, String id) {
-        // A simulated time history (designs[i].time_history) is drawn here once dev.coilwise.dynamics provides one.
+        d.simulation().ifPresent(s -> s.history().filter(t -> t.size() > 1).ifPresent(t -> h.figure("history",
+                HistoryChart.svg(r, d, t, id + "-history"), HistoryChart.caption(r, d, s))));
     }
 
     private static void facts(Html h, String title, List<Fact> facts) {

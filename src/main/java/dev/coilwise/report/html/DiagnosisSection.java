@@ -23,11 +23,17 @@ final class DiagnosisSection {
         }
         ReportDiagnosis d = r.diagnosis().get();
         DisplayUnits u = r.display();
-        h.el("p", "No spring on the searched grid meets every limit. To explain why, coilwise sampled " + d.sampled()
-                + " candidates across every family and counted the limits each one fails (a candidate may fail"
-                + " several).");
+        boolean byRanking = !d.removedBy().isEmpty() && LimitNames.RANKING_RULES.containsAll(d.removedBy().keySet());
+        if (byRanking) {
+            h.el("p", "The search found feasible designs, but the ranking rules below removed all " + d.sampled()
+                    + " leading ones. Relax the rule, or widen the design space so that more designs reach it.");
+        } else {
+            h.el("p", "No spring on the searched grid meets every limit. To explain why, coilwise sampled "
+                    + d.sampled() + " candidates across every family and counted the limits each one fails (a"
+                    + " candidate may fail several).");
+        }
         h.open("table", "class=\"sortable removed\"");
-        h.el("caption", "Limits that removed the sampled candidates");
+        h.el("caption", byRanking ? "Rules that removed the leading designs" : "Limits that removed the sampled candidates");
         h.raw("<thead><tr><th scope=\"col\">Limit</th><th scope=\"col\">Candidates failing it</th>"
                 + "<th scope=\"col\">Share of those sampled<span class=\"unit\">%</span></th></tr></thead>\n");
         h.open("tbody");
@@ -41,7 +47,8 @@ final class DiagnosisSection {
         h.close("tbody").close("table");
         h.el("h3", "Nearest misses");
         if (d.nearest().isEmpty()) {
-            h.el("p", "No sampled design fails a single limit only: several limits would have to be relaxed at once.");
+            h.el("p", byRanking ? "None: the designs were removed by a ranking rule, not by a limit."
+                    : "No sampled design fails a single limit only: several limits would have to be relaxed at once.");
         } else {
             h.el("p", "Designs that fail one limit only, smallest shortfall first, and what would let each pass.");
             String l = u.lengthUnit();

@@ -78,7 +78,7 @@ public final class HtmlReportWriter {
     private static void tradeOff(Html h, ReportData r) {
         h.open("section", "id=\"trade-off\"");
         h.el("h2", "Trade-off across feasible families");
-        if (TradeOffChart.plotted(r).isEmpty()) {
+        if (!TradeOffChart.drawable(r)) {
             h.el("p", "This shortlist does not hold the feasible families, so the trade-off cannot be drawn; size the"
                     + " requirement again to get it.");
         } else {

@@ -5,6 +5,9 @@ final class LimitNames {
     private LimitNames() {
     }
 
+    /** Keys of the ranking rules that can empty a shortlist after the search found feasible designs. */
+    static final java.util.Set<String> RANKING_RULES = java.util.Set.of("min_probability", "dynamics");
+
     static String of(String key, boolean arrest) {
         return switch (key) {
             case "stroke" -> arrest ? "stroke" : "cocking stroke";
@@ -22,6 +25,8 @@ final class LimitNames {
             case "buckling" -> "buckling";
             case "surge" -> "surge";
             case "fatigue" -> "fatigue life";
+            case "min_probability" -> "share made within limits (ranking.min_probability)";
+            case "dynamics" -> "simulation warnings (ranking.dynamics: strict)";
             default -> key.replace('_', ' ');
         };
     }

@@ -10,18 +10,47 @@ import java.util.Optional;
  * One shortlisted design as the report shows it. SI throughout.
  *
  * @param rank             1-based rank
+ * @param stock            the catalogue part, for a stock design (empty: a custom design to be made)
  * @param material         material key
  * @param materialStandard the wire standard, e.g. ASTM A228
  * @param ends             end type key
  * @param geometry         the spring as ordered
  * @param working          its working figures for the job
  * @param margins          every limit checked
- * @param history          a simulated time history, when one was saved
+ * @param testLoads        test loads for the spring maker (F1, F2) with their EN 15800 tolerances
+ * @param fatigueFactor    fatigue safety factor, when a cycle life was asked for (NaN otherwise)
+ * @param probabilityOk    share of springs made to the tolerances that meet every limit (NaN when not computed)
+ * @param simulation       the time-domain check, when it was run
  */
-public record ReportDesign(int rank, String material, String materialStandard, String ends, Geometry geometry,
-                           Working working, List<ReportMargin> margins, Optional<TimeSeries> history) {
+public record ReportDesign(int rank, Optional<Stock> stock, String material, String materialStandard, String ends,
+                           Geometry geometry, Working working, List<ReportMargin> margins, List<TestLoad> testLoads,
+                           double fatigueFactor, double probabilityOk, Optional<SimulationView> simulation) {
     public ReportDesign {
         margins = List.copyOf(margins);
+        testLoads = List.copyOf(testLoads);
+    }
+
+    /**
+     * A catalogue part.
+     *
+     * @param partNumber part number
+     * @param supplier   supplier
+     * @param unitPrice  price per piece (NaN when not stated)
+     * @param currency   currency of the price
+     */
+    public record Stock(String partNumber, String supplier, double unitPrice, String currency) {
+    }
+
+    /**
+     * A test load: the force the spring must give at a stated length.
+     *
+     * @param name      F1 or F2
+     * @param length    test length, m
+     * @param force     nominal force, N
+     * @param tolerance ± force tolerance, N
+     * @param grade     EN 15800 grade of the tolerance
+     */
+    public record TestLoad(String name, double length, double force, double tolerance, int grade) {
     }
 
     /**
@@ -115,7 +144,19 @@ public record ReportDesign(int rank, String material, String materialStandard, S
                 d.number("surge_speed_limit_m_per_s"));
         List<ReportMargin> margins = new ArrayList<>();
         d.objects("margins").forEach(m -> margins.add(ReportMargin.from(m)));
-        return new ReportDesign(d.integer("rank"), d.text("material"), d.text("material_standard", ""), d.text("ends"),
-                g, w, margins, d.optionalObject("time_history").map(TimeSeries::from));
+        List<TestLoad> loads = new ArrayList<>();
+        if (d.has("test_loads")) {
+            d.objects("test_loads").forEach(t -> loads.add(new TestLoad(t.text("name"), t.mm("length_mm"),
+                    t.number("force_N"), t.number("force_tolerance_N"), t.integer("grade"))));
+        }
+        Optional<Stock> stock = "stock".equals(d.text("source", "custom"))
+                ? Optional.of(new Stock(d.text("part_number", ""), d.text("supplier", ""),
+                        d.optionalNumber("unit_price"), d.text("currency", "")))
+                : Optional.empty();
+        return new ReportDesign(d.integer("rank"), stock, d.text("material"), d.text("material_standard", ""),
+                d.text("ends"), g, w, margins, loads,
+                d.optionalObject("fatigue").map(f -> f.number("safety_factor")).orElse(Double.NaN),
+                d.optionalObject("scatter").map(f -> f.number("probability_ok")).orElse(Double.NaN),
+                d.optionalObject("simulation").map(SimulationView::from));
     }
 }

@@ -29,7 +29,7 @@ final class RequirementWords {
             if (!Double.isNaN(drop)) {
                 s.append(" after a ").append(u.lenWithUnit(drop * 1e-3)).append(" drop");
             }
-            s.append(", ").append(direction(m.number("direction_deg_below_horizontal"), "below"));
+            s.append(", ").append(direction(m.number("direction_deg_below_horizontal")));
             double push = m.optionalNumber("drive_force_N");
             if (push > 0) {
                 s.append(", pushed on by ").append(u.forceWithUnit(push));
@@ -43,8 +43,8 @@ final class RequirementWords {
                     + u.lenWithUnit(l.mm("height_mm")) + " above the muzzle (the spring's free-length top), launched "
                     + (Math.abs(angle - 90) < 0.5 ? "straight up" : fmt("%.0f deg above the horizontal", angle))
                     + "; it must leave at " + sig(u.speed(l.number("exit_speed_needed_m_per_s"))) + " " + u.speedUnit()
-                    + ". Guide friction loses " + fmt("%.0f", l.number("losses_pct"))
-                    + " % of the stored energy. The spring may be cocked at most " + u.lenWithUnit(stroke) + ".");
+                    + ". " + losses(l.number("losses_pct")) + " The spring may be cocked at most "
+                    + u.lenWithUnit(stroke) + ".");
         }
         List<String> limits = new ArrayList<>();
         double force = lim.optionalNumber("peak_force_N");
@@ -117,6 +117,11 @@ final class RequirementWords {
         return s.toString();
     }
 
+    private static String losses(double pct) {
+        return pct > 0 ? "Guide friction loses " + fmt("%.0f", pct) + " % of the stored energy."
+                : "No loss to guide friction is assumed.";
+    }
+
     private static String range(double[] r) {
         return r.length == 2 ? sig(r[0]) + " to " + sig(r[1]) : "-";
     }
@@ -125,14 +130,14 @@ final class RequirementWords {
         return sig(u.loadMass(kg)) + " " + u.loadMassUnit();
     }
 
-    private static String direction(double degBelow, String word) {
+    private static String direction(double degBelow) {
         if (Math.abs(degBelow - 90) < 0.5) {
             return "falling straight down";
         }
         if (Math.abs(degBelow) < 0.5) {
             return "moving horizontally";
         }
-        return degBelow > 0 ? fmt("moving %.0f deg %s the horizontal", degBelow, word)
+        return degBelow > 0 ? fmt("moving %.0f deg below the horizontal", degBelow)
                 : fmt("moving %.0f deg above the horizontal", -degBelow);
     }
 

@@ -38,6 +38,10 @@ final class ShortlistSection {
         boolean arrest = r.arrest();
         List<Column> c = new ArrayList<>();
         c.add(new Column("Rank", "", d -> Cell.number(String.valueOf(d.rank()), d.rank())));
+        if (r.designs().stream().anyMatch(d -> d.stock().isPresent())) {
+            c.add(new Column("Source", "", d -> Cell.text(d.stock().map(s -> "stock " + s.partNumber())
+                    .orElse("custom"))));
+        }
         c.add(new Column("Material", "", d -> Cell.text(d.material())));
         c.add(new Column("Ends", "", d -> Cell.text(d.ends())));
         c.add(new Column("Wire dia. d", l, d -> len(u, d.geometry().wireDiameter(), true)));
@@ -57,6 +61,10 @@ final class ShortlistSection {
             c.add(new Column("Apex rise", l, d -> len(u, d.working().predictedHeight(), false)));
         }
         c.add(new Column("Spring mass", u.springMassUnit(), d -> num(u.springMass(d.working().mass()))));
+        if (r.designs().stream().anyMatch(d -> !Double.isNaN(d.probabilityOk()))) {
+            c.add(new Column("Made OK", "%", d -> Double.isNaN(d.probabilityOk()) ? Cell.text("")
+                    : Cell.number(fmt("%.1f", d.probabilityOk() * 100), d.probabilityOk() * 100)));
+        }
         c.add(new Column("Binding limit", "", d -> Cell.text(d.binding().map(b -> LimitNames.of(b.key(), arrest))
                 .orElse(""))));
         c.add(new Column("Margin left", "%", d -> d.binding()
@@ -79,6 +87,7 @@ final class ShortlistSection {
         h.el("p", "class=\"hint noprint\"", "Click a column heading to sort the table by it; click again to reverse."
                 + " The rank links to the design's own section.");
         List<Column> cols = columns(r);
+        h.open("div", "class=\"shortlist-wrap\"");
         h.open("table", "class=\"sortable shortlist\"");
         h.open("thead").open("tr");
         for (Column c : cols) {
@@ -105,7 +114,7 @@ final class ShortlistSection {
             }
             h.close("tr");
         }
-        h.close("tbody").close("table");
+        h.close("tbody").close("table").close("div");
         if (!r.warnings().isEmpty()) {
             h.el("h3", "Notes");
             h.open("ul", "class=\"notes\"");

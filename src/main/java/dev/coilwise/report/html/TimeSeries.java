@@ -5,9 +5,10 @@ import dev.coilwise.error.Message;
 import java.util.Arrays;
 
 /**
- * A simulated time history of one design, as saved under {@code designs[i].time_history}: equal-length columns
- * {@code time_s}, {@code load_position_mm} (travel of the load's contact face from the spring's free-length top,
- * towards the base) and {@code top_force_N} (force between spring and load). SI inside; arrays copied in and out.
+ * A simulated time history of one design, as saved under {@code designs[i].simulation.history} (thinned for charts):
+ * equal-length columns {@code time_ms}, {@code load_position_mm} (position of the load's contact face from the
+ * spring's free-length top, towards the base) and {@code top_force_N} (force between spring and load). SI inside;
+ * arrays copied in and out.
  *
  * @param time     s
  * @param travel   m
@@ -59,12 +60,12 @@ public record TimeSeries(double[] time, double[] travel, double[] force) {
     }
 
     static TimeSeries from(JsonIn h) {
-        double[] t = h.numbers("time_s");
+        double[] t = java.util.Arrays.stream(h.numbers("time_ms")).map(v -> v * 1e-3).toArray();
         double[] x = h.numbers("load_position_mm");
         double[] f = h.numbers("top_force_N");
         if (x.length != t.length || f.length != t.length) {
             throw BadInputException.of(Message.SAVED_FIELD, h.path(), "columns of " + t.length + ", " + x.length
-                    + " and " + f.length + " rows", "time_s, load_position_mm and top_force_N of equal length");
+                    + " and " + f.length + " rows", "time_ms, load_position_mm and top_force_N of equal length");
         }
         return new TimeSeries(t, Arrays.stream(x).map(v -> v * 1e-3).toArray(), f);
     }

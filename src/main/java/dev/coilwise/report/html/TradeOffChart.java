@@ -4,6 +4,7 @@ import dev.coilwise.report.DisplayUnits;
 import java.awt.Font;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.ToDoubleFunction;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.axis.NumberAxis;
@@ -19,14 +20,13 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
- * Spring mass against peak (arrest) or cocking (launch) force across every feasible family: one point per family
- * (its best design by the ranking criterion), the shortlist as numbered filled squares, the others as hollow circles,
- * and the Pareto front of the two figures as a dashed staircase.
+ * Spring mass against peak (arrest) or cocking (launch) force across every feasible design family: one hollow circle
+ * per family that was not shortlisted (its best design by the ranking criterion), the shortlist as numbered filled
+ * squares (stock parts as filled triangles), and the Pareto front of the two figures as a dashed staircase.
  */
 final class TradeOffChart {
     static final int WIDTH = 760;
     static final int HEIGHT = 500;
-
     /** Share of each axis span within which a second rank label would overlap the first and is left out. */
     private static final double CROWDED = 0.035;
     /** Spread (largest over smallest) above which an axis is drawn on a logarithmic scale. */
@@ -35,33 +35,61 @@ final class TradeOffChart {
     private TradeOffChart() {
     }
 
-    private static double span(List<FamilyPoint> points, java.util.function.ToDoubleFunction<FamilyPoint> f) {
-        double lo = points.stream().mapToDouble(f).min().orElse(0);
-        double hi = points.stream().mapToDouble(f).max().orElse(1);
-        return hi > lo ? hi - lo : Math.max(Math.abs(hi), 1e-9);
+    /**
+     * One plotted design.
+     *
+     * @param force arrest: peak force; launch: cocking force, N
+     * @param mass  spring mass, kg
+     * @param rank  shortlist rank, 0 when not shortlisted
+     * @param stock whether it is a catalogue part
+     */
+    record Point(double force, double mass, int rank, boolean stock) {
+        boolean finite() {
+            return Double.isFinite(force) && Double.isFinite(mass) && force > 0 && mass > 0;
+        }
     }
 
-    static List<FamilyPoint> plotted(ReportData r) {
-        return r.families().stream().filter(p -> Double.isFinite(p.mass()) && Double.isFinite(p.peakForce())).toList();
+    /** The shortlist (from the designs) and every other feasible family (from the saved family bests). */
+    static List<Point> points(ReportData r) {
+        List<Point> out = new ArrayList<>();
+        for (ReportDesign d : r.designs()) {
+            out.add(new Point(d.working().peakForce(), d.working().mass(), d.rank(), d.stock().isPresent()));
+        }
+        for (FamilyPoint f : r.families()) {
+            if (f.shortlistRank() == 0) {
+                out.add(new Point(f.peakForce(), f.mass(), 0, false));
+            }
+        }
+        return out.stream().filter(Point::finite).toList();
     }
 
-    static List<FamilyPoint> front(ReportData r) {
-        return ParetoFront.of(plotted(r), FamilyPoint::peakForce, FamilyPoint::mass);
+    static List<Point> front(ReportData r) {
+        return ParetoFront.of(points(r), Point::force, Point::mass);
     }
 
-    /** Whether the masses span so wide a range that a logarithmic axis shows the crowded end better. */
+    /** Whether there is something to compare: the saved families besides the shortlist. */
+    static boolean drawable(ReportData r) {
+        return !r.families().isEmpty() && !points(r).isEmpty();
+    }
+
     static boolean logMass(ReportData r) {
-        return ratio(plotted(r), FamilyPoint::mass) > LOG_ABOVE;
+        return ratio(points(r), Point::mass) > LOG_ABOVE;
     }
 
     static boolean logForce(ReportData r) {
-        return ratio(plotted(r), FamilyPoint::peakForce) > LOG_ABOVE;
+        return ratio(points(r), Point::force) > LOG_ABOVE;
     }
 
-    private static double ratio(List<FamilyPoint> points, java.util.function.ToDoubleFunction<FamilyPoint> f) {
+    private static double ratio(List<Point> points, ToDoubleFunction<Point> f) {
         double lo = points.stream().mapToDouble(f).min().orElse(1);
         double hi = points.stream().mapToDouble(f).max().orElse(1);
         return lo > 0 ? hi / lo : 1;
+    }
+
+    private static double span(List<Point> points, ToDoubleFunction<Point> f) {
+        double lo = points.stream().mapToDouble(f).min().orElse(0);
+        double hi = points.stream().mapToDouble(f).max().orElse(1);
+        return hi > lo ? hi - lo : Math.max(Math.abs(hi), 1e-9);
     }
 
     private static ValueAxis axis(String label, boolean log) {
@@ -79,46 +107,58 @@ final class TradeOffChart {
 
     static String svg(ReportData r, String id) {
         DisplayUnits u = r.display();
-        int shortlisted = r.designs().size();
+        List<Point> all = points(r);
         XYSeries others = new XYSeries("others", false);
-        XYSeries top = new XYSeries("shortlist", false);
-        List<String> labels = new ArrayList<>();
-        List<FamilyPoint> labelled = new ArrayList<>();
-        double spanF = span(plotted(r), FamilyPoint::peakForce);
-        double spanM = span(plotted(r), FamilyPoint::mass);
-        for (FamilyPoint p : plotted(r)) {
-            if (p.rank() <= shortlisted) {
-                top.add(u.force(p.peakForce()), u.springMass(p.mass()));
-                boolean room = labelled.stream().noneMatch(q -> Math.abs(q.peakForce() - p.peakForce()) < CROWDED * spanF
-                        && Math.abs(q.mass() - p.mass()) < CROWDED * spanM);
-                labels.add(room ? String.valueOf(p.rank()) : "");
-                if (room) {
-                    labelled.add(p);
-                }
-            } else {
-                others.add(u.force(p.peakForce()), u.springMass(p.mass()));
+        XYSeries custom = new XYSeries("shortlist", false);
+        XYSeries stock = new XYSeries("stock", false);
+        List<String> customLabels = new ArrayList<>();
+        List<String> stockLabels = new ArrayList<>();
+        List<Point> labelled = new ArrayList<>();
+        double spanF = span(all, Point::force);
+        double spanM = span(all, Point::mass);
+        List<Point> byRank = new ArrayList<>(all);
+        byRank.sort(java.util.Comparator.comparingInt(p -> p.rank() == 0 ? Integer.MAX_VALUE : p.rank()));
+        for (Point p : byRank) {
+            double x = u.force(p.force());
+            double y = u.springMass(p.mass());
+            if (p.rank() == 0) {
+                others.add(x, y);
+                continue;
             }
+            boolean room = labelled.stream().noneMatch(q -> Math.abs(q.force() - p.force()) < CROWDED * spanF
+                    && Math.abs(q.mass() - p.mass()) < CROWDED * spanM);
+            if (room) {
+                labelled.add(p);
+            }
+            (p.stock() ? stock : custom).add(x, y);
+            (p.stock() ? stockLabels : customLabels).add(room ? String.valueOf(p.rank()) : "");
         }
         XYSeries stairs = new XYSeries("front", false);
-        front(r).forEach(p -> stairs.add(u.force(p.peakForce()), u.springMass(p.mass())));
+        front(r).forEach(p -> stairs.add(u.force(p.force()), u.springMass(p.mass())));
 
         XYSeriesCollection points = new XYSeriesCollection();
         points.addSeries(others);
-        points.addSeries(top);
+        points.addSeries(custom);
+        points.addSeries(stock);
         XYLineAndShapeRenderer dots = new XYLineAndShapeRenderer(false, true);
         dots.setSeriesShape(0, ChartStyle.circle(8));
         dots.setSeriesPaint(0, ChartStyle.MUTED);
         dots.setSeriesShapesFilled(0, false);
         dots.setSeriesShape(1, ChartStyle.square(10));
         dots.setSeriesPaint(1, ChartStyle.DESIGN);
-        dots.setSeriesShapesFilled(1, true);
+        dots.setSeriesShape(2, ChartStyle.triangle(12));
+        dots.setSeriesPaint(2, ChartStyle.DESIGN);
         dots.setUseOutlinePaint(false);
-        dots.setSeriesItemLabelsVisible(1, true);
-        dots.setSeriesItemLabelGenerator(1, (dataset, series, item) -> labels.get(item));
-        dots.setSeriesItemLabelFont(1, ChartStyle.font(Font.BOLD, 11));
-        dots.setSeriesItemLabelPaint(1, ChartStyle.LIMIT);
-        dots.setSeriesPositiveItemLabelPosition(1, new ItemLabelPosition(ItemLabelAnchor.OUTSIDE3,
-                TextAnchor.CENTER_LEFT));
+        for (int s = 1; s <= 2; s++) {
+            List<String> labels = s == 1 ? customLabels : stockLabels;
+            dots.setSeriesShapesFilled(s, true);
+            dots.setSeriesItemLabelsVisible(s, true);
+            dots.setSeriesItemLabelGenerator(s, (dataset, series, item) -> labels.get(item));
+            dots.setSeriesItemLabelFont(s, ChartStyle.font(Font.BOLD, 11));
+            dots.setSeriesItemLabelPaint(s, ChartStyle.LIMIT);
+            dots.setSeriesPositiveItemLabelPosition(s, new ItemLabelPosition(ItemLabelAnchor.OUTSIDE3,
+                    TextAnchor.CENTER_LEFT));
+        }
 
         XYStepRenderer step = new XYStepRenderer();
         step.setSeriesPaint(0, ChartStyle.ACCENT);
@@ -134,6 +174,9 @@ final class TradeOffChart {
 
         LegendItemCollection legend = new LegendItemCollection();
         legend.add(ChartStyle.shapeItem("shortlist (rank)", ChartStyle.square(10), ChartStyle.DESIGN, true));
+        if (!stock.isEmpty()) {
+            legend.add(ChartStyle.shapeItem("shortlisted stock part", ChartStyle.triangle(11), ChartStyle.DESIGN, true));
+        }
         legend.add(ChartStyle.shapeItem("other feasible families", ChartStyle.circle(8), ChartStyle.MUTED, false));
         legend.add(ChartStyle.lineItem("Pareto front (none lighter at a lower force)", ChartStyle.DASHED,
                 ChartStyle.ACCENT));
@@ -147,10 +190,12 @@ final class TradeOffChart {
         DisplayUnits u = r.display();
         String scales = logMass(r) && logForce(r) ? " (both axes logarithmic)" : logMass(r) ? " (mass axis logarithmic)"
                 : logForce(r) ? " (force axis logarithmic)" : "";
-        return "Trade-off across the " + plotted(r).size() + " feasible families: spring mass in "
-                + u.springMassUnit() + " against " + forceName(r) + " in " + u.forceUnit() + scales + ". Each point is the best"
-                + " design of one material, end type and wire diameter by " + r.rankedBy().replace('_', ' ')
-                + "; the shortlist is drawn as filled squares, numbered by rank where there is room. On the dashed"
-                + " Pareto front no other family is both lighter and lower in force; " + front(r).size() + " families lie on it.";
+        long others = points(r).stream().filter(p -> p.rank() == 0).count();
+        return "Trade-off between spring mass in " + u.springMassUnit() + " and " + forceName(r) + " in "
+                + u.forceUnit() + scales + ": the " + r.designs().size() + " shortlisted designs, numbered by rank"
+                + " where there is room, and " + others + " other feasible families, each shown by its best design"
+                + " (one material, end type and wire diameter; best by " + r.rankedBy().replace('_', ' ') + "). On the"
+                + " dashed Pareto front no other design is both lighter and lower in force; " + front(r).size()
+                + " designs lie on it.";
     }
 }

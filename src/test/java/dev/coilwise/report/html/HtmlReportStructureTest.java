@@ -159,4 +159,41 @@ class HtmlReportStructureTest {
         assertThat(print).contains("section.design { break-before: page;")
                 .containsPattern("figure[^{]*\\{ break-inside: avoid;");
     }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"arrest-small", "launch-small"})
+    void aSimulatedDesignHasItsTimeHistoryChart(String name) {
+        SizingResult r = ReportFixtures.sized(name);
+        Document doc = page(name);
+        assertThat(r.shortlist()).as("the fixture keeps the simulation's history")
+                .allMatch(e -> e.simulation().isPresent() && e.history().size() > 1);
+        for (ShortlistEntry e : r.shortlist()) {
+            Element chart = doc.getElementById("design-" + e.rank() + "-history");
+            assertThat(chart).as("time-history chart of design %d", e.rank()).isNotNull();
+            assertThat(texts(chart)).contains(r.requirement().isArrest() ? "time from first contact t (ms)"
+                    : "time from release t (ms)", "load position x (mm)", "force on the load F (N)");
+            assertThat(chart.parent().selectFirst("figcaption").text()).contains(
+                    e.simulation().orElseThrow().masses() + " lumped masses");
+        }
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"arrest-stock+stock"})
+    void stockPartsAreNamedInTheTableAndInTheirSection(String name) {
+        SizingResult r = ReportFixtures.sized(name);
+        List<ShortlistEntry> stock = r.shortlist().stream().filter(e -> e.candidate().isStock()).toList();
+        assertThat(stock).as("the fixture shortlists a stock part").isNotEmpty();
+        Document doc = page(name);
+        assertThat(doc.select("table.shortlist thead th").first().nextElementSibling().text()).isEqualTo("Source");
+        for (ShortlistEntry e : r.shortlist()) {
+            Element row = doc.getElementById("row-" + e.rank());
+            String pn = e.candidate().stock().map(p -> "stock " + p.partNumber()).orElse("custom");
+            assertThat(row.child(1).text()).isEqualTo(pn);
+            if (e.candidate().isStock()) {
+                assertThat(doc.selectFirst("#design-" + e.rank() + " h2").text())
+                        .contains("stock part " + e.candidate().stock().orElseThrow().partNumber());
+            }
+        }
+        assertThat(texts(doc.selectFirst("#trade-off svg"))).contains("shortlisted stock part");
+    }
 }

@@ -10,6 +10,7 @@ import dev.coilwise.error.BadInputException;
 import dev.coilwise.model.Arrest;
 import dev.coilwise.report.ShortlistJson;
 import dev.coilwise.search.Candidate;
+import dev.coilwise.search.ShortlistEntry;
 import dev.coilwise.search.SizingResult;
 import org.junit.jupiter.api.Test;
 
@@ -26,13 +27,13 @@ class ReportDataTest {
     }
 
     @Test
-    void theSavedFeasibleFamiliesAreEveryFamilyBestWithTheShortlistAtTheHead() {
+    void theSavedFeasibleFamiliesAreEveryFamilyBestAndMarkTheShortlistedOnes() {
         ReportData data = ReportData.of(arrest);
         assertThat(data.families()).hasSize(arrest.search().best().size());
         for (int i = 0; i < data.families().size(); i++) {
             FamilyPoint p = data.families().get(i);
             Candidate c = arrest.search().best().get(i);
-            assertThat(p.rank()).isEqualTo(i + 1);
+            assertThat(p.searchRank()).isEqualTo(i + 1);
             assertThat(p.material()).isEqualTo(c.family().material().key());
             assertThat(p.ends()).isEqualTo(c.family().ends().key());
             assertThat(p.wireDiameter()).isCloseTo(c.family().wireDiameter(), within(1e-9));
@@ -40,11 +41,13 @@ class ReportDataTest {
             assertThat(p.mass()).isCloseTo(c.evaluation().mass(), within(1e-5 * c.evaluation().mass()));
             assertThat(p.peakForce()).isCloseTo(c.evaluation().peakForce(), within(1e-5 * c.evaluation().peakForce()));
         }
-        for (int i = 0; i < data.designs().size(); i++) {
-            assertThat(data.designs().get(i).material()).isEqualTo(data.families().get(i).material());
-            assertThat(data.designs().get(i).geometry().wireDiameter())
-                    .isEqualTo(data.families().get(i).wireDiameter());
+        for (ShortlistEntry e : arrest.shortlist()) {
+            FamilyPoint p = data.families().stream().filter(f -> f.shortlistRank() == e.rank()).findFirst()
+                    .orElseThrow(() -> new AssertionError("no family marked with shortlist rank " + e.rank()));
+            assertThat(p.material()).isEqualTo(e.evaluation().spring().material().key());
+            assertThat(p.wireDiameter()).isCloseTo(e.evaluation().spring().wireDiameter(), within(1e-9));
         }
+        assertThat(data.families().stream().filter(f -> f.shortlistRank() > 0)).hasSize(arrest.shortlist().size());
     }
 
     @Test
