@@ -91,11 +91,17 @@ public final class HtmlReportWriter {
         ReportData.SearchCounts s = r.search();
         h.open("section", "id=\"search\"");
         h.el("h2", "What was searched");
-        h.el("p", s.families() + " families (" + s.materials() + " materials, " + s.ends() + " end types, "
-                + s.wireSizes() + " wire sizes); " + s.evaluated() + " candidates evaluated in full; "
-                + s.feasibleFamilies() + " families have a feasible design. Each family is searched over mean"
-                + " diameter, active coils and free length; the shortlist keeps one design per family.");
+        h.el("p", count(s.families(), "family", "families") + " (" + count(s.materials(), "material", "materials")
+                + ", " + count(s.ends(), "end type", "end types") + ", " + count(s.wireSizes(), "wire size", "wire sizes")
+                + "); " + count(s.evaluated(), "candidate", "candidates") + " evaluated in full; "
+                + count(s.feasibleFamilies(), "family has", "families have") + " a feasible design. Each family is"
+                + " searched over mean diameter, active coils and free length; the shortlist keeps one design per"
+                + " family.");
         h.close("section");
+    }
+
+    private static String count(long n, String one, String many) {
+        return n + " " + (n == 1 ? one : many);
     }
 
     static String resource(String name) {

@@ -113,11 +113,21 @@ final class TradeOffChart {
         XYSeries stock = new XYSeries("stock", false);
         List<String> customLabels = new ArrayList<>();
         List<String> stockLabels = new ArrayList<>();
-        List<Point> labelled = new ArrayList<>();
-        double spanF = span(all, Point::force);
-        double spanM = span(all, Point::mass);
+        ToDoubleFunction<Point> fx = logForce(r) ? p -> Math.log(p.force()) : Point::force;
+        ToDoubleFunction<Point> fy = logMass(r) ? p -> Math.log(p.mass()) : Point::mass;
+        double spanF = span(all, fx);
+        double spanM = span(all, fy);
         List<Point> byRank = new ArrayList<>(all);
         byRank.sort(java.util.Comparator.comparingInt(p -> p.rank() == 0 ? Integer.MAX_VALUE : p.rank()));
+        java.util.Set<Point> labelled = new java.util.LinkedHashSet<>();
+        for (Point p : byRank) {
+            if (p.rank() > 0 && labelled.stream().noneMatch(q -> Math.abs(fx.applyAsDouble(q) - fx.applyAsDouble(p))
+                    < CROWDED * spanF && Math.abs(fy.applyAsDouble(q) - fy.applyAsDouble(p)) < CROWDED * spanM)) {
+                labelled.add(p);
+            }
+        }
+        // drawn from the last rank to the first, so that the best designs and their labels lie on top
+        java.util.Collections.reverse(byRank);
         for (Point p : byRank) {
             double x = u.force(p.force());
             double y = u.springMass(p.mass());
@@ -125,13 +135,8 @@ final class TradeOffChart {
                 others.add(x, y);
                 continue;
             }
-            boolean room = labelled.stream().noneMatch(q -> Math.abs(q.force() - p.force()) < CROWDED * spanF
-                    && Math.abs(q.mass() - p.mass()) < CROWDED * spanM);
-            if (room) {
-                labelled.add(p);
-            }
             (p.stock() ? stock : custom).add(x, y);
-            (p.stock() ? stockLabels : customLabels).add(room ? String.valueOf(p.rank()) : "");
+            (p.stock() ? stockLabels : customLabels).add(labelled.contains(p) ? String.valueOf(p.rank()) : "");
         }
         XYSeries stairs = new XYSeries("front", false);
         front(r).forEach(p -> stairs.add(u.force(p.force()), u.springMass(p.mass())));
@@ -149,6 +154,7 @@ final class TradeOffChart {
         dots.setSeriesShape(2, ChartStyle.triangle(12));
         dots.setSeriesPaint(2, ChartStyle.DESIGN);
         dots.setUseOutlinePaint(false);
+        dots.setItemLabelAnchorOffset(5);
         for (int s = 1; s <= 2; s++) {
             List<String> labels = s == 1 ? customLabels : stockLabels;
             dots.setSeriesShapesFilled(s, true);
