@@ -38,7 +38,8 @@ class ReportCommandTest {
     @Test
     void reportRendersTheSamePageFromTheSavedShortlistAsSizeWrote() throws Exception {
         Path sized = tmp.resolve("sized");
-        assertThat(run("size", demo("arrest-small"), "--samples", "500", "--out", sized.toString())).isEqualTo(ExitCode.OK);
+        assertThat(run("size", demo("arrest-small"), "--samples", "500", "--out", sized.toString()))
+                .isEqualTo(ExitCode.OK);
         assertThat(sized.resolve("report.html")).isRegularFile();
 
         Path again = tmp.resolve("again");
@@ -52,7 +53,8 @@ class ReportCommandTest {
     @Test
     void withoutOutTheReportIsWrittenBesideTheShortlist() throws Exception {
         Path sized = tmp.resolve("sized");
-        assertThat(run("size", demo("launch-small"), "--samples", "500", "--out", sized.toString())).isEqualTo(ExitCode.OK);
+        assertThat(run("size", demo("launch-small"), "--samples", "500", "--out", sized.toString()))
+                .isEqualTo(ExitCode.OK);
         Path saved = Files.createDirectories(tmp.resolve("saved")).resolve("shortlist.json");
         Files.copy(sized.resolve("shortlist.json"), saved);
 

@@ -196,4 +196,18 @@ class HtmlReportStructureTest {
         }
         assertThat(texts(doc.selectFirst("#trade-off svg"))).contains("shortlisted stock part");
     }
+
+    @org.junit.jupiter.api.Test
+    void textFromASavedShortlistIsEscapedInTheTextAndInTheCharts() {
+        com.fasterxml.jackson.databind.node.ObjectNode tree = dev.coilwise.report.ShortlistJson.tree(
+                ReportFixtures.sized("arrest-small"));
+        ((com.fasterxml.jackson.databind.node.ObjectNode) tree.get("requirement")).put("title", "<b id=\"t\">x</b>");
+        com.fasterxml.jackson.databind.JsonNode margins = tree.get("designs").get(0).get("margins");
+        ((com.fasterxml.jackson.databind.node.ObjectNode) margins.get(0)).put("limit", "<i id=\"m\">y</i>");
+        Document doc = Jsoup.parse(HtmlReportWriter.write(ReportData.fromJson(tree)));
+        assertThat(doc.getElementById("t")).isNull();
+        assertThat(doc.getElementById("m")).isNull();
+        assertThat(doc.selectFirst("h1").text()).isEqualTo("<b id=\"t\">x</b>");
+        assertThat(texts(doc.getElementById("design-1-margins"))).anyMatch(t -> t.startsWith("<i id=\"m\">y</i>"));
+    }
 }
