@@ -183,8 +183,8 @@ final class ForceDeflectionChart {
     static String caption(ReportData r, ReportDesign d) {
         DisplayUnits u = r.display();
         List<String> parts = new ArrayList<>();
-        parts.add("Force against deflection from free length for design " + d.rank() + ", in " + u.forceUnit()
-                + " and " + u.lengthUnit() + "; the top axis gives the spring's length.");
+        parts.add("Spring force (" + u.forceUnit() + ") against deflection from free length (" + u.lengthUnit()
+                + ") for design " + d.rank() + "; the top axis gives the spring's length (" + u.lengthUnit() + ").");
         parts.add((r.arrest() ? "The shaded area is the energy the spring takes up while stopping the load, "
                 : "The shaded area is the energy stored when cocked, ") + sig(d.workingEnergy()) + " J.");
         if (!Double.isNaN(r.forceLimit()) && !forceLimitDrawn(r, d)) {

@@ -109,15 +109,17 @@ final class HistoryChart {
         return p;
     }
 
+    /** A horizontal reference line: the energy balance labelled at the right end, a limit (dotted) at the left. */
     private static void line(XYPlot p, double at, String label, Stroke stroke) {
+        boolean limit = stroke == ChartStyle.DOTTED;
         ValueMarker m = new ValueMarker(at, ChartStyle.LIMIT, stroke);
         m.setLabel(label);
         m.setLabelFont(ChartStyle.font(Font.PLAIN, 11));
         m.setLabelPaint(ChartStyle.LIMIT);
         m.setLabelBackgroundColor(ChartStyle.LABEL_BACKGROUND);
-        m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-        m.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
-        m.setLabelOffset(new RectangleInsets(2, 2, 2, 6));
+        m.setLabelAnchor(limit ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
+        m.setLabelTextAnchor(limit ? TextAnchor.BOTTOM_LEFT : TextAnchor.BOTTOM_RIGHT);
+        m.setLabelOffset(new RectangleInsets(2, 6, 2, 6));
         p.addRangeMarker(m, Layer.FOREGROUND);
     }
 
@@ -126,8 +128,8 @@ final class HistoryChart {
         String peak = DisplayUnits.sig(u.force(s.peakForce())) + " " + u.forceUnit();
         String balance = DisplayUnits.sig(u.force(d.working().peakForce())) + " " + u.forceUnit();
         return "Simulated " + (r.arrest() ? "arrest" : "launch") + " of design " + d.rank() + " with the spring split"
-                + " into " + s.masses() + " lumped masses: load position in " + u.lengthUnit() + " (upper panel) and"
-                + " force between spring and load in " + u.forceUnit() + " (lower panel) against time in ms. Simulated"
+                + " into " + s.masses() + " lumped masses: load position (" + u.lengthUnit() + ", upper panel) and"
+                + " force between spring and load (" + u.forceUnit() + ", lower panel) against time (ms). Simulated"
                 + " peak force " + peak + " against " + balance + " from the massless energy balance (largest"
                 + " difference " + fmt("%.1f", s.deviationPct()) + " %)" + (s.coilClash() ? "; coils clash" : "")
                 + ". The history is thinned to at most 240 samples for the chart.";

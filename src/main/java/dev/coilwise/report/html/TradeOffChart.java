@@ -197,8 +197,8 @@ final class TradeOffChart {
         String scales = logMass(r) && logForce(r) ? " (both axes logarithmic)" : logMass(r) ? " (mass axis logarithmic)"
                 : logForce(r) ? " (force axis logarithmic)" : "";
         long others = points(r).stream().filter(p -> p.rank() == 0).count();
-        return "Trade-off between spring mass in " + u.springMassUnit() + " and " + forceName(r) + " in "
-                + u.forceUnit() + scales + ": the " + r.designs().size() + " shortlisted designs, numbered by rank"
+        return "Trade-off between spring mass (" + u.springMassUnit() + ") and " + forceName(r) + " ("
+                + u.forceUnit() + ")" + scales + ": the " + r.designs().size() + " shortlisted designs, numbered by rank"
                 + " where there is room, and " + others + " other feasible families, each shown by its best design"
                 + " (one material, end type and wire diameter; best by " + r.rankedBy().replace('_', ' ') + "). On the"
                 + " dashed Pareto front no other design is both lighter and lower in force; " + front(r).size()
