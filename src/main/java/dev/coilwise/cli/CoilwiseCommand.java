@@ -14,7 +14,8 @@ import picocli.CommandLine.Spec;
         header = "Sizes helical compression springs that arrest a moving load or launch a payload.",
         description = {"Springs store energy, and launched payloads and failing buffers can hurt people. Results are"
             + " a design aid: confirm them by test; local codes, standards and licensed engineering practice govern."},
-        subcommands = {SizeCommand.class, CheckCommand.class, SimulateCommand.class, SweepCommand.class,
+        subcommands = {SizeCommand.class, CheckCommand.class, SimulateCommand.class, ReportCommand.class,
+            SweepCommand.class,
             MaterialsCommand.class, NewCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n", exitCodeList = {

@@ -16,6 +16,8 @@ import dev.coilwise.report.ShortlistTable;
 import dev.coilwise.report.SpecSheet;
 import dev.coilwise.report.SpecSheetHtmlWriter;
 import dev.coilwise.report.SpecSheetPdfWriter;
+import dev.coilwise.report.html.HtmlReportWriter;
+import dev.coilwise.report.html.ReportData;
 import dev.coilwise.requirement.RequirementReader;
 import dev.coilwise.scatter.ScatterSettings;
 import dev.coilwise.search.PrunedSearch;
@@ -39,8 +41,8 @@ import picocli.CommandLine.Parameters;
             + " lengths, keeps the designs that meet every limit (beside feasible stock parts when the file lists"
             + " catalogues), checks the shortlist against manufacturing scatter and with a time-domain simulation,"
             + " and prints it.",
-            "With --out DIR, writes shortlist.csv, shortlist.json and, for each custom design, a specification sheet"
-            + " (spec-N.pdf and spec-N.html) to DIR."})
+            "With --out DIR, writes shortlist.csv, shortlist.json, report.html (one self-contained page with charts)"
+            + " and, for each custom design, a specification sheet (spec-N.pdf and spec-N.html) to DIR."})
 final class SizeCommand extends BaseCommand {
     enum Format { table, csv, json }
 
@@ -114,7 +116,8 @@ final class SizeCommand extends BaseCommand {
         Progress progress = new Progress(err(), "scatter", System.console() != null);
         SizingOptions options = new SizingOptions(
                 samples == 0 ? Optional.empty() : Optional.of(ScatterSettings.defaults().withSamples(samples).withSeed(seed)),
-                progress, masses == 0 ? Optional.empty() : Optional.of(SimulationOptions.defaults().withMasses(masses)));
+                progress, masses == 0 ? Optional.empty()
+                        : Optional.of(SimulationOptions.defaults().withMasses(masses).withHistory(true)));
         SizingResult result = new Sizer(table, new PrunedSearch(), options).size(req, stock)
                 .withLeadingWarnings(catalogueNotes);
         progress.finish();
@@ -128,6 +131,7 @@ final class SizeCommand extends BaseCommand {
             OutputFolder folder = new OutputFolder(out, inputs(req));
             folder.add("shortlist.json", json);
             folder.add("shortlist.csv", csv);
+            folder.add("report.html", HtmlReportWriter.write(ReportData.parse(json)));
             addSpecSheets(folder, result);
             folder.commit().forEach(p -> written.add(p.getFileName().toString()));
         }

@@ -4,6 +4,7 @@ import dev.coilwise.catalog.StockEvaluation;
 import dev.coilwise.catalog.StockEvaluator;
 import dev.coilwise.catalog.StockPart;
 import dev.coilwise.dynamics.SimulationOptions;
+import dev.coilwise.dynamics.SimulationResult;
 import dev.coilwise.dynamics.SimulationSummary;
 import dev.coilwise.dynamics.Simulator;
 import dev.coilwise.materials.MaterialTable;
@@ -120,14 +121,15 @@ public final class Sizer {
         while (kept.size() < n && next < entries.size()) {
             List<ShortlistEntry> batch = entries.subList(next, Math.min(entries.size(), next + n - kept.size()));
             next += batch.size();
-            List<SimulationSummary> sims = batch.parallelStream()
-                    .map(e -> Simulator.simulate(e.evaluation().spring(), req, e.evaluation(), opt).summary()).toList();
+            List<SimulationResult> sims = batch.parallelStream()
+                    .map(e -> Simulator.simulate(e.evaluation().spring(), req, e.evaluation(), opt)).toList();
             for (int i = 0; i < batch.size(); i++) {
-                if (strict && sims.get(i).flagged()) {
+                SimulationSummary summary = sims.get(i).summary();
+                if (strict && summary.flagged()) {
                     dropped++;
                     Candidate c = batch.get(i).candidate();
                     warnings.add("left the shortlist under ranking.dynamics: strict: " + describe(c) + ": "
-                            + String.join("; ", sims.get(i).flags()));
+                            + String.join("; ", summary.flags()));
                 } else {
                     kept.add(batch.get(i).withSimulation(sims.get(i)));
                 }
