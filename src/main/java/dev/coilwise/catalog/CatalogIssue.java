@@ -1,5 +1,7 @@
 package dev.coilwise.catalog;
 
+import dev.coilwise.error.SafeText;
+
 /**
  * One problem found while reading a catalogue, with its position.
  *
@@ -11,6 +13,15 @@ package dev.coilwise.catalog;
  * @param message  what is wrong, with the value found and what is allowed
  */
 public record CatalogIssue(Severity severity, String file, long line, String column, String message) {
+    /** Longest column name and message kept, characters (a cell of junk is cut, not repeated in full). */
+    static final int MAX_COLUMN_CHARS = 60, MAX_MESSAGE_CHARS = 400;
+
+    /** Control characters from the file are escaped and long texts cut, so each issue prints on one short line. */
+    public CatalogIssue {
+        file = SafeText.escape(file);
+        column = SafeText.quote(column, MAX_COLUMN_CHARS);
+        message = SafeText.quote(message, MAX_MESSAGE_CHARS);
+    }
 
     /** How serious an issue is. */
     public enum Severity {

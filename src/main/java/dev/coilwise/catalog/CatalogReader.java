@@ -3,12 +3,14 @@ package dev.coilwise.catalog;
 import dev.coilwise.catalog.CatalogIssue.Severity;
 import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.Message;
+import dev.coilwise.error.SafeText;
 import dev.coilwise.materials.MaterialTable;
 import dev.coilwise.model.EndType;
+import dev.coilwise.requirement.InputFiles;
 import java.io.IOException;
 import java.io.Reader;
+import java.io.StringReader;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -37,6 +39,15 @@ public final class CatalogReader {
     public static final double STATED_VALUE_TOLERANCE = 0.10;
     /** How many issues a failure message lists before it summarises the rest. */
     static final int MAX_LISTED = 40;
+    /**
+     * Largest catalogue file read, bytes: 32 MiB, about 200 000 rows of our format; coilwise's own bound, so that a
+     * wrong file (a disk image, a log) is refused at once instead of filling memory.
+     */
+    public static final int MAX_BYTES = 32 << 20;
+    /** Most rows read from one catalogue. */
+    public static final int MAX_ROWS = 500_000;
+    private static final String EXAMPLE_HEADER = "part_number,supplier,material,ends,wire_diameter_mm,outer_diameter_mm,"
+            + "free_length_mm,active_coils,unit_price,currency (see docs/catalog-format.md)";
 
     private final MaterialTable materials;
     private final boolean lenient;
@@ -73,11 +84,14 @@ public final class CatalogReader {
 
     /** Reads a file through {@code mapping}, or in our own format when {@code mapping} is null. */
     public StockCatalog read(Path file, ColumnMapping mapping) {
-        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return read(in, file.getFileName().toString(), mapping);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot read catalogue " + file, e);
+        String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
+        String text;
+        try {
+            text = InputFiles.readUtf8(file, MAX_BYTES);
+        } catch (BadInputException e) {
+            throw new BadInputException(SafeText.escape(name) + ": " + e.getMessage(), e);
         }
+        return read(new StringReader(text), name, mapping);
     }
 
     /**
@@ -89,9 +103,15 @@ public final class CatalogReader {
      */
     public StockCatalog read(Reader in, String name, ColumnMapping mapping) {
         char delimiter = mapping == null ? ',' : mapping.delimiter();
-        CSVFormat format = CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setCommentMarker('#')
-                .setHeader().setSkipHeaderRecord(true).setIgnoreEmptyLines(true).setIgnoreSurroundingSpaces(true)
-                .setTrim(true).get();
+        CSVFormat format;
+        try {
+            format = CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setCommentMarker('#')
+                    .setHeader().setSkipHeaderRecord(true).setIgnoreEmptyLines(true).setIgnoreSurroundingSpaces(true)
+                    .setTrim(true).get();
+        } catch (IllegalArgumentException e) {
+            throw new BadInputException(name + ": the mapping's delimiter '" + SafeText.escape(String.valueOf(delimiter))
+                    + "' cannot separate CSV fields (" + e.getMessage() + "); use ',', ';' or tab");
+        }
         List<CatalogIssue> issues = new ArrayList<>();
         List<StockPart> parts = new ArrayList<>();
         try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(format).get()) {
@@ -99,24 +119,46 @@ public final class CatalogReader {
             boolean demo = description.toLowerCase(Locale.ROOT).contains("demo");
             List<String> header = parser.getHeaderNames();
             long headerLine = parser.getCurrentLineNumber();
+            if (header.isEmpty()) {
+                throw new BadInputException(name + ": no header line; the first line that is not a comment must name the"
+                        + " columns, e.g. " + EXAMPLE_HEADER);
+            }
             ColumnMapping m = mapping == null ? NativeHeader.mapping(header, name, headerLine, issues)
                     : checkMapping(mapping, header, name, headerLine, issues);
             failOnErrors(name, issues, true);
             RowReader rows = new RowReader(materials, m, name, demo);
             for (CSVRecord r : parser) {
                 long line = parser.getCurrentLineNumber();
+                if (parts.size() + issues.size() >= MAX_ROWS) {
+                    throw new BadInputException(name + ": more than " + MAX_ROWS + " rows; split the catalogue");
+                }
                 if (r.size() != header.size()) {
+                    String hint = r.size() > header.size() && delimiter == ','
+                            ? "; a comma inside a cell (a decimal comma, a list) splits it: put such cells in double quotes,"
+                                    + " or read the file through a mapping with its own delimiter and decimal_separator" : "";
                     issues.add(new CatalogIssue(Severity.ERROR, name, line, "",
-                            Message.CATALOG_RAGGED_ROW.format(r.size(), header.size())));
+                            Message.CATALOG_RAGGED_ROW.format(r.size(), header.size()) + hint));
                     continue;
                 }
                 rows.read(r, line, issues).ifPresent(parts::add);
             }
             failOnErrors(name, issues, !lenient);
             return new StockCatalog(name, description, demo, parts, issues);
-        } catch (IOException | IllegalArgumentException | IllegalStateException e) {
-            throw new BadInputException(name + ": not a readable CSV catalogue: " + e.getMessage(), e);
+        } catch (IOException | UncheckedIOException | IllegalArgumentException | IllegalStateException e) {
+            throw new BadInputException(name + ": not a readable CSV catalogue: " + csvProblem(e), e);
         }
+    }
+
+    /** The parser's complaint in the reader's words, on one line. */
+    private static String csvProblem(Exception e) {
+        Throwable t = e instanceof UncheckedIOException u && u.getCause() != null ? u.getCause() : e;
+        String m = String.valueOf(t.getMessage());
+        java.util.regex.Matcher quote = java.util.regex.Pattern.compile("\\(startline (\\d+)\\) EOF reached before encapsulated"
+                + " token finished").matcher(m);
+        if (quote.find()) {
+            return "the quoted cell that starts on line " + quote.group(1) + " is never closed; add the closing '\"'";
+        }
+        return SafeText.quote(m.replaceAll("\\s+", " "), 300);
     }
 
     /** Mapped columns must exist in the header; mapped material and end names must name our keys. */

@@ -5,10 +5,9 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.Message;
+import dev.coilwise.error.SafeText;
+import dev.coilwise.requirement.InputFiles;
 import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -43,12 +42,17 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
 
     /** Reads a mapping file. */
     public static ColumnMapping load(Path file) {
+        String text;
         try {
-            return parse(Files.readString(file, StandardCharsets.UTF_8), file.getFileName().toString());
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            text = InputFiles.readUtf8(file, MAX_BYTES);
+        } catch (BadInputException e) {
+            throw new BadInputException(SafeText.escape(String.valueOf(file.getFileName())) + ": " + e.getMessage(), e);
         }
+        return parse(text, file.getFileName().toString());
     }
+
+    /** Largest mapping file read, bytes: 1 MiB (a mapping is a few hundred bytes). */
+    static final int MAX_BYTES = 1 << 20;
 
     /**
      * Parses a mapping; every problem is collected and reported together.
@@ -62,7 +66,17 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
         try {
             root = new ObjectMapper(new YAMLFactory()).readTree(yaml);
         } catch (IOException e) {
-            throw new BadInputException(source + ": not valid YAML: " + e.getMessage(), e);
+            String where = "";
+            String why = e.getMessage();
+            if (e.getCause() instanceof org.yaml.snakeyaml.error.MarkedYAMLException m && m.getProblemMark() != null) {
+                where = ":" + (m.getProblemMark().getLine() + 1) + ":" + (m.getProblemMark().getColumn() + 1);
+                why = (m.getContext() == null ? "" : m.getContext() + ": ") + m.getProblem();
+            } else if (e instanceof com.fasterxml.jackson.core.JsonProcessingException j && j.getLocation() != null) {
+                where = ":" + j.getLocation().getLineNr() + ":" + j.getLocation().getColumnNr();
+                why = j.getOriginalMessage();
+            }
+            throw new BadInputException(source + where + ": not valid YAML: "
+                    + SafeText.quote(String.valueOf(why).replaceAll("\\s+", " ").strip(), 200), e);
         }
         List<String> problems = new ArrayList<>();
         if (root == null || !root.isObject()) {

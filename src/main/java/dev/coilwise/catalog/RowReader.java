@@ -42,6 +42,10 @@ final class RowReader {
             failed |= sev == Severity.ERROR;
         }
 
+        ColumnSource source(CatalogField f) {
+            return mapping.fields().get(f);
+        }
+
         /** Cell text, stripped; null when the field is unmapped or the cell is empty. */
         String text(CatalogField f) {
             ColumnSource src = mapping.fields().get(f);
@@ -50,6 +54,10 @@ final class RowReader {
             }
             String v = src.isConstant() ? src.constant() : record.get(src.column());
             v = v == null ? "" : v.strip();
+            if (v.chars().anyMatch(Character::isISOControl)) {
+                issue(Severity.ERROR, f, f.description() + " '" + v + "' holds a control character; write plain text");
+                return null;
+            }
             if (v.isEmpty()) {
                 if (f.required()) {
                     issue(Severity.ERROR, f, Message.CATALOG_EMPTY_VALUE.format(f.description()));
@@ -100,6 +108,13 @@ final class RowReader {
         }
     }
 
+    /**
+     * Bounds on a part, coilwise's own (the same as for spring files, docs/requirement-format.md): outer diameter
+     * 1 m, free length 5 m, active coils 200 (the model's bound), pack quantity a million springs. A value past one
+     * is a slip of the number or of the column's unit.
+     */
+    static final double MAX_DIAMETER = 1, MAX_LENGTH = 5, MAX_COILS = 200, MAX_PACK = 1e6;
+
     RowReader(MaterialTable materials, ColumnMapping mapping, String file, boolean demo) {
         this.materials = materials;
         this.mapping = mapping;
@@ -128,7 +143,14 @@ final class RowReader {
         if (pack.isPresent() && pack.getAsDouble() != Math.rint(pack.getAsDouble())) {
             row.issue(Severity.ERROR, CatalogField.PACK_QUANTITY,
                     "pack quantity must be a whole number of springs, got " + fmt(pack.getAsDouble()));
+        } else if (pack.isPresent() && pack.getAsDouble() > MAX_PACK) {
+            row.issue(Severity.ERROR, CatalogField.PACK_QUANTITY, "pack quantity must be at most " + (long) MAX_PACK
+                    + " springs, got " + fmt(pack.getAsDouble()));
         }
+        bound(row, CatalogField.OUTER_DIAMETER, od, MAX_DIAMETER, "1 m");
+        bound(row, CatalogField.FREE_LENGTH, l0, MAX_LENGTH, "5 m");
+        bound(row, CatalogField.ACTIVE_COILS, na, MAX_COILS, "200");
+        bound(row, CatalogField.TOTAL_COILS, nt, MAX_COILS + 2, "202");
         if (na.isEmpty() && nt.isEmpty() && !row.failed) {
             row.issue(Severity.ERROR, null, "the row gives neither active nor total coils");
         }
@@ -167,6 +189,17 @@ final class RowReader {
         }
         return Optional.of(new StockPart(part, supplier, spring, price.getAsDouble(), currency,
                 pack.isPresent() ? (int) pack.getAsDouble() : 1, rate, ls, maxDefl, maxLoad, flags, file + ":" + line));
+    }
+
+    /** A value past coilwise's bound for the field is a row error naming the bound. */
+    private static void bound(Row row, CatalogField f, OptionalDouble v, double max, String maxText) {
+        if (v.isPresent() && v.getAsDouble() > max) {
+            ColumnSource src = row.source(f);
+            String written = src.isConstant() ? src.constant() : row.record.get(src.column());
+            row.issue(Severity.ERROR, f, f.description() + " '" + written.strip() + "'"
+                    + (src.unit() == null ? "" : " " + src.unit().symbol()) + " is more than " + maxText
+                    + ", the largest coilwise accepts; check the number and the column's unit");
+        }
     }
 
     private boolean differs(Row row, CatalogField f, double stated, double computed) {

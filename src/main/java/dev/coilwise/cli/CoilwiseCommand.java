@@ -15,8 +15,7 @@ import picocli.CommandLine.Spec;
         description = {"Springs store energy, and launched payloads and failing buffers can hurt people. Results are"
             + " a design aid: confirm them by test; local codes, standards and licensed engineering practice govern."},
         subcommands = {SizeCommand.class, CheckCommand.class, SimulateCommand.class, ReportCommand.class,
-            SweepCommand.class,
-            MaterialsCommand.class, NewCommand.class,
+            SweepCommand.class, MaterialsCommand.class, NewCommand.class, SchemaCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n", exitCodeList = {
             "0:Success.",
@@ -30,6 +29,15 @@ final class CoilwiseCommand implements Runnable {
     static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new CoilwiseCommand());
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> { // faults outside a command's own handling
+            boolean debug = parsed.originalArgs().contains("--debug");
+            line.getErr().println(ex instanceof dev.coilwise.error.BadInputException ? "error: " + ex.getMessage()
+                    : ExitCode.faultLine(ex, debug));
+            if (debug) {
+                ex.printStackTrace(line.getErr());
+            }
+            return ExitCode.of(ex);
+        });
         return cl;
     }
 

@@ -15,6 +15,7 @@ import dev.coilwise.model.Spring;
 import dev.coilwise.model.SpringOptions;
 import dev.coilwise.search.Candidate;
 import dev.coilwise.search.Diagnosis;
+import dev.coilwise.search.LimitConflict;
 import dev.coilwise.search.NearMiss;
 import dev.coilwise.search.SearchResult;
 import dev.coilwise.search.ShortlistEntry;
@@ -358,6 +359,18 @@ public final class ShortlistJson {
         n.put("sampled", d.sampled());
         ObjectNode rb = n.putObject("removed_by");
         d.removedBy().forEach(rb::put);
+        ArrayNode conflicts = n.putArray("no_spring_can");
+        for (LimitConflict c : d.conflicts()) {
+            ObjectNode o = conflicts.addObject();
+            boolean decel = c.limit().equals("deceleration");
+            o.put("limit", c.limit());
+            o.put("unit", decel ? "gn" : "N");
+            Json.put(o, "allowed", decel ? DisplayUnits.gn(c.allowed()) : c.allowed());
+            Json.put(o, "least_needed", decel ? DisplayUnits.gn(c.leastNeeded()) : c.leastNeeded());
+            Json.put(o, "least_with_preload", decel ? DisplayUnits.gn(c.withPreload()) : c.withPreload());
+            Json.put(o, "stroke_needed_mm", c.strokeNeeded() * 1e3);
+            o.put("advice", LimitConflictWords.describe(c, req, u));
+        }
         ArrayNode near = n.putArray("nearest_misses");
         for (NearMiss m : d.nearest()) {
             ObjectNode o = near.addObject();

@@ -17,6 +17,25 @@ public final class ShortlistTable {
     private ShortlistTable() {
     }
 
+    /** What failing each limit means, for the diagnosis. */
+    static final Map<String, String> LIMIT_WORDS = Map.ofEntries(
+            Map.entry("stroke", "compress further than limits.stroke"),
+            Map.entry("peak_force", "exceed limits.peak_force"),
+            Map.entry("deceleration", "exceed limits.deceleration"),
+            Map.entry("coil_bind", "close solid before the end of the stroke (with the clash allowance)"),
+            Map.entry("stress_working", "are over-stressed at the working deflection"),
+            Map.entry("stress_solid", "are over-stressed when compressed solid (spring.solid_safe)"),
+            Map.entry("fit_bore", "grow too wide for envelope.bore at solid"),
+            Map.entry("fit_rod", "are too tight on envelope.rod"),
+            Map.entry("free_length", "are longer than envelope.max_free_length"),
+            Map.entry("pocket", "are shorter than envelope.pocket_length"),
+            Map.entry("buckling", "buckle unguided"),
+            Map.entry("surge", "meet the load faster than a wave can travel along the coils (surge)"),
+            Map.entry("index", "fall outside spring.index"),
+            Map.entry("active_coils", "fall outside spring.active_coils"),
+            Map.entry("fatigue", "fall short of spring.fatigue_margin"),
+            Map.entry("min_probability", "fall short of ranking.min_probability under manufacturing scatter"));
+
     public static String write(SizingResult r, DisplayUnits u) {
         StringBuilder sb = new StringBuilder();
         sb.append(summary(r.requirement(), u)).append('\n');
@@ -30,9 +49,25 @@ public final class ShortlistTable {
         } else {
             sb.append('\n').append("NO FEASIBLE DESIGN: no spring on the grid meets every limit.\n");
             r.diagnosis().ifPresent(d -> {
-                sb.append("Limits that removed the sampled candidates (").append(d.sampled()).append(" sampled):\n");
+                if (!d.conflicts().isEmpty()) {
+                    sb.append("No spring can meet these limits, whatever its material, size or ends (work-energy balance):\n");
+                    d.conflicts().forEach(c -> sb.append("  ").append(LimitConflictWords.describe(c, r.requirement(), u))
+                            .append('\n'));
+                }
+                if (r.search().evaluated() == 0) {
+                    sb.append("The search's bounds ruled out every candidate before evaluating one; the diagnosis samples"
+                            + " the design space instead.\n");
+                }
+                sb.append("Limits that removed the sampled candidates (").append(d.sampled()).append(" sampled; a candidate"
+                        + " may fail several):\n");
                 for (Map.Entry<String, Long> en : d.removedBy().entrySet()) {
-                    sb.append(DisplayUnits.fmt("  %-16s %d%n", en.getKey(), en.getValue()));
+                    sb.append(DisplayUnits.fmt("  %-16s %7d  %s%n", en.getKey(), en.getValue(), LIMIT_WORDS.getOrDefault(
+                            en.getKey(), "")));
+                }
+                if (d.nearest().isEmpty() && d.removedBy().size() > 1) {
+                    List<String> leading = d.removedBy().keySet().stream().limit(2).toList();
+                    sb.append("No sampled design fails only one limit: relax the leading ones together (")
+                            .append(String.join(" and ", leading)).append(").\n");
                 }
                 if (!d.nearest().isEmpty()) {
                     sb.append("Nearest misses (each fails one limit):\n");

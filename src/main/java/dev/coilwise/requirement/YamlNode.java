@@ -21,17 +21,21 @@ sealed interface YamlNode permits YamlNode.Scalar, YamlNode.Mapping, YamlNode.Se
     /** A short description for "expected ..., got ..." messages. */
     String describe();
 
+    /** What the YAML parser took a scalar for: quoted text is always {@code STRING}. */
+    enum Type { STRING, NUMBER, BOOLEAN, NULL }
+
     /**
      * A scalar value.
      *
      * @param text     the text as written (without quotes); empty for a key with no value
      * @param bool     for a plain {@code true}/{@code false} (YAML 1.1 also reads yes/no, on/off), its value; else null
+     * @param type     what the parser took it for (for the schema check, which sees types as an editor does)
      * @param position where the value starts
      */
-    record Scalar(String text, Boolean bool, Position position) implements YamlNode {
+    record Scalar(String text, Boolean bool, Type type, Position position) implements YamlNode {
         @Override
         public String describe() {
-            return text.isEmpty() ? "no value" : "'" + text + "'";
+            return text.isEmpty() ? "no value" : "'" + Shown.value(text) + "'";
         }
     }
 

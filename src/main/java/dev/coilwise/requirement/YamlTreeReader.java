@@ -62,10 +62,10 @@ final class YamlTreeReader {
     static Optional<YamlNode.Mapping> read(String text, Problems problems, String needed) {
         int bytes = text.getBytes(StandardCharsets.UTF_8).length;
         if (bytes > MAX_BYTES) {
-            problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format(bytes, MAX_BYTES));
+            problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format("has " + bytes, MAX_BYTES, MAX_BYTES >> 20));
             return Optional.empty();
         }
-        return new YamlTreeReader(problems).readTree(text, needed);
+        return new YamlTreeReader(problems).readTree(FileText.stripBom(text), needed);
     }
 
     private Optional<YamlNode.Mapping> readTree(String text, String needed) {
@@ -155,14 +155,17 @@ final class YamlTreeReader {
         }
         Boolean bool = t == JsonToken.VALUE_TRUE ? Boolean.TRUE : t == JsonToken.VALUE_FALSE ? Boolean.FALSE : null;
         String text = t == JsonToken.VALUE_NULL ? "" : p.getText();
-        return new YamlNode.Scalar(text == null ? "" : text, bool, at);
+        YamlNode.Type type = bool != null ? YamlNode.Type.BOOLEAN : t == JsonToken.VALUE_NULL ? YamlNode.Type.NULL
+                : t == JsonToken.VALUE_NUMBER_INT || t == JsonToken.VALUE_NUMBER_FLOAT ? YamlNode.Type.NUMBER
+                : YamlNode.Type.STRING;
+        return new YamlNode.Scalar(text == null ? "" : text, bool, type, at);
     }
 
     private void checkTagAndAlias(YAMLParser p, YamlNode.Position at) throws IOException {
         if (p.isCurrentAlias()) {
             if (aliases++ == 0) {
                 firstAlias = at;
-                firstAliasName = p.getText();
+                firstAliasName = Shown.value(p.getText());
             }
             refused = true;
             if (aliases > MAX_ALIASES_FOR_COLLECTIONS) {
@@ -172,7 +175,7 @@ final class YamlTreeReader {
         String tag = p.getTypeId();
         if (tag != null) {
             String shown = tag.startsWith(YAML_TAG_PREFIX) ? "!!" + tag.substring(YAML_TAG_PREFIX.length()) : tag;
-            problems.add(at, "", Message.YAML_TAG.format(shown));
+            problems.add(at, "", Message.YAML_TAG.format(Shown.value(shown)));
             refused = true;
         }
     }

@@ -155,7 +155,7 @@ class RequirementReaderTest {
     void rangeAndWholeNumberChecksOnSpringOptions() {
         assertThatThrownBy(() -> parse(ARREST + "spring: {tolerance_grade: 2.5, index: [1, 12], clash_allowance: 0.15}\n"))
                 .isInstanceOf(RequirementException.class)
-                .hasMessageContaining("test.yaml:8:27: spring.tolerance_grade: expected a whole number, got '2.5'")
+                .hasMessageContaining("test.yaml:8:27: spring.tolerance_grade: expected a whole number from 1 to 3, got '2.5'")
                 .hasMessageContaining("test.yaml:8:40: spring.index: must lie between 2 and 30, got '1'")
                 .hasMessageContaining("spring.clash_allowance: '0.15' has no unit; give a percentage such as '5 %'");
     }

@@ -115,4 +115,25 @@ class SpringFileReaderTest {
                 .containsExactly("s.yaml:3:16: wire_diameter: wire diameter 8.000 mm is outside the range of music-wire"
                         + " (0.100 to 6.500 mm); coilwise does not extrapolate a material fit");
     }
+
+    // Mass of a helical spring m = (pi d^2/4) pi D Nt rho (wire volume times density; Shigley's MED 9th ed., Sec. 10-8,
+    // from memory). 6.5 mm music wire (rho = 7850 kg/m^3) on a 900 mm mean diameter with 200 total coils:
+    // 3.318e-5 m^2 x 2.827 m x 200 x 7850 = 147 kg, over the 100 kg bound.
+    @Test
+    void absurdSpringsAreRefusedWithTheBound() {
+        String base = """
+                material: music-wire
+                ends: plain
+                wire_diameter: 6.5 mm
+                mean_diameter: %s
+                total_coils: 200
+                free_length: %s
+                """;
+        assertThat(problems(base.formatted("900 mm", "2000 mm"))).containsExactly("s.yaml:1:1: the spring described would"
+                + " weigh 147 kg; coilwise checks springs of at most 100 kg: check the diameters, the coil count and their units");
+        assertThat(problems(base.formatted("3 m", "2000 mm"))).containsExactly("s.yaml:4:16: mean_diameter: '3 m' is more than"
+                + " 1 m (39.4 in), the largest mean coil diameter coilwise accepts; check the number and its unit");
+        assertThat(problems(base.formatted("60 mm", "20 m"))).containsExactly("s.yaml:6:14: free_length: '20 m' is more than"
+                + " 5 m (16.4 ft), the largest free length coilwise accepts; check the number and its unit");
+    }
 }
