@@ -23,6 +23,12 @@ final class DiagnosisSection {
         }
         ReportDiagnosis d = r.diagnosis().get();
         DisplayUnits u = r.display();
+        if (!d.conflicts().isEmpty()) {
+            h.el("p", "No spring can meet these limits, whatever its material, size or ends (work-energy balance):");
+            h.open("ul", "class=\"conflicts\"");
+            d.conflicts().forEach(c -> h.el("li", c.advice()));
+            h.close("ul");
+        }
         boolean byRanking = !d.removedBy().isEmpty() && LimitNames.RANKING_RULES.containsAll(d.removedBy().keySet());
         if (byRanking) {
             h.el("p", "The search found feasible designs, but the ranking rules below removed all " + d.sampled()
@@ -30,7 +36,8 @@ final class DiagnosisSection {
         } else {
             h.el("p", "No spring on the searched grid meets every limit. To explain why, coilwise sampled "
                     + d.sampled() + " candidates across every family and counted the limits each one fails (a"
-                    + " candidate may fail several).");
+                    + " candidate may fail several)." + (r.search().evaluated() == 0 ? " The search's bounds had"
+                    + " ruled out every candidate before evaluating one." : ""));
         }
         h.open("table", "class=\"sortable removed\"");
         h.el("caption", byRanking ? "Rules that removed the leading designs" : "Limits that removed the sampled candidates");

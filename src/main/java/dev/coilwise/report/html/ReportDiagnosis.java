@@ -12,11 +12,23 @@ import java.util.Map;
  * @param sampled   candidates sampled for the diagnosis
  * @param removedBy per limit key, how many sampled candidates fail it, highest first
  * @param nearest   designs failing one limit by the least, with what to relax
+ * @param conflicts force or deceleration limits that no spring can meet within the stroke (work-energy bound)
  */
-public record ReportDiagnosis(long sampled, Map<String, Long> removedBy, List<Miss> nearest) {
+public record ReportDiagnosis(long sampled, Map<String, Long> removedBy, List<Miss> nearest,
+                              List<Conflict> conflicts) {
     public ReportDiagnosis {
         removedBy = Collections.unmodifiableMap(new LinkedHashMap<>(removedBy));
         nearest = List.copyOf(nearest);
+        conflicts = List.copyOf(conflicts);
+    }
+
+    /**
+     * A limit no spring can meet, whatever its material, size or ends.
+     *
+     * @param limit  limit key
+     * @param advice what to change, in words (written by coilwise size in the requirement's units)
+     */
+    public record Conflict(String limit, String advice) {
     }
 
     /**
@@ -48,6 +60,10 @@ public record ReportDiagnosis(long sampled, Map<String, Long> removedBy, List<Mi
                     m.mm("outer_diameter_mm"), m.number("active_coils"), m.mm("free_length_mm"), m.text("fails"),
                     m.number("shortfall_pct") / 100, m.text("would_pass_if")));
         }
-        return new ReportDiagnosis((long) d.number("sampled"), removed, misses);
+        List<Conflict> conflicts = new ArrayList<>();
+        if (d.has("no_spring_can")) {
+            d.objects("no_spring_can").forEach(c -> conflicts.add(new Conflict(c.text("limit"), c.text("advice"))));
+        }
+        return new ReportDiagnosis((long) d.number("sampled"), removed, misses, conflicts);
     }
 }

@@ -34,7 +34,8 @@ class DiagnosisReportTest {
             assertThat(rows.get(i).child(1).text()).isEqualTo(String.valueOf(e.getValue()));
             i++;
         }
-        assertThat(doc.select("#diagnosis p").first().text()).contains(String.valueOf(d.sampled()));
+        assertThat(doc.select("#diagnosis p").eachText()).anyMatch(t -> t.contains("sampled " + d.sampled()
+                + " candidates"));
     }
 
     @Test
@@ -54,5 +55,18 @@ class DiagnosisReportTest {
     void noShortlistTradeOffOrDesignSectionIsShown() {
         assertThat(doc.select("#shortlist, #trade-off, section.design, svg")).isEmpty();
         assertThat(doc.selectFirst("header .verdict").text()).startsWith("No design meets every limit.");
+    }
+
+    @Test
+    void aForceLimitNoSpringCanMeetIsExplainedWithWhatToChange() {
+        SizingResult conflict = ReportFixtures.sized("arrest-force-conflict");
+        Diagnosis d = conflict.diagnosis().orElseThrow();
+        assertThat(d.conflicts()).as("the demo case's force limit is below the work-energy bound").isNotEmpty();
+        Document page = Jsoup.parse(HtmlReportWriter.write(ReportData.of(conflict)));
+        List<String> shown = page.select("#diagnosis ul.conflicts li").eachText();
+        assertThat(shown).hasSize(d.conflicts().size());
+        assertThat(shown.get(0)).startsWith("limits.peak_force 100 N is below ").contains("raise limits.peak_force");
+        assertThat(doc.select("#diagnosis ul.conflicts li")).as("the stroke-limited case has its own conflicts")
+                .hasSize(result.diagnosis().orElseThrow().conflicts().size());
     }
 }
