@@ -25,7 +25,7 @@ final class Progress {
     }
 
     /** Shows that {@code done} of {@code total} steps are finished. */
-    void update(int done, int total) {
+    synchronized void update(int done, int total) {
         if (!terminal || System.nanoTime() - start < delayNs) {
             return;
         }
@@ -36,7 +36,7 @@ final class Progress {
     }
 
     /** Ends the bar's line, if one was drawn. */
-    void finish() {
+    synchronized void finish() {
         if (drawn) {
             err.println();
             err.flush();
