@@ -122,6 +122,10 @@ final class FamilyScan {
             double extra = f.ends().solidLength(d, f.ends().totalCoils(0)) / d;
             coils[1] = Math.min(coils[1], (long) Math.ceil((maxFree / d - extra) / Grid.COIL_STEP) + 1);
         }
+        if (coils[1] < coils[0] || leader != null && beaten(bound.overFamily(g.length(dLo), g.length(dHi), g.coils(coils[0]),
+                g.coils(coils[1])))) {
+            return; // only when another family's best is known: the family's own incumbent is still empty
+        }
         forceCap = req.limits().peakForce().orElse(Double.POSITIVE_INFINITY);
         if (arrest != null && req.limits().deceleration().isPresent()) {
             forceCap = Math.min(forceCap, arrest.mass() * req.limits().deceleration().getAsDouble() + push);
