@@ -8,7 +8,11 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
-/** Shared behaviour of the subcommands: --debug, and turning exceptions into messages and exit codes. */
+/**
+ * Shared behaviour of the subcommands: --debug, and turning exceptions into messages and exit codes. Bad input prints
+ * "error: " and the message (every problem of a file, one per line) and exits 2; anything else is an internal fault:
+ * one line naming it, exit 1, the stack trace only with --debug.
+ */
 @Command(mixinStandardHelpOptions = true, exitCodeListHeading = "%nExit codes:%n", exitCodeList = {
     "0:Success.",
     "1:Internal fault (a bug); run with --debug for the stack trace.",
@@ -39,8 +43,8 @@ abstract class BaseCommand implements Callable<Integer> {
                 e.printStackTrace(err());
             }
             return ExitCode.BAD_INPUT;
-        } catch (RuntimeException | java.io.IOException e) {
-            err().println("internal fault: " + e + (debug ? "" : " (run with --debug for details)"));
+        } catch (Exception | StackOverflowError | OutOfMemoryError | AssertionError | LinkageError e) {
+            err().println(ExitCode.faultLine(e, debug));
             if (debug) {
                 e.printStackTrace(err());
             }

@@ -14,7 +14,8 @@ import picocli.CommandLine.Spec;
         header = "Sizes helical compression springs that arrest a moving load or launch a payload.",
         description = {"Springs store energy, and launched payloads and failing buffers can hurt people. Results are"
             + " a design aid: confirm them by test; local codes, standards and licensed engineering practice govern."},
-        subcommands = {SizeCommand.class, CheckCommand.class, SweepCommand.class, MaterialsCommand.class,
+        subcommands = {SizeCommand.class, CheckCommand.class, SimulateCommand.class, ReportCommand.class,
+            SweepCommand.class, MaterialsCommand.class, NewCommand.class, SchemaCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n", exitCodeList = {
             "0:Success.",
@@ -28,6 +29,15 @@ final class CoilwiseCommand implements Runnable {
     static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new CoilwiseCommand());
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> { // faults outside a command's own handling
+            boolean debug = parsed.originalArgs().contains("--debug");
+            line.getErr().println(ex instanceof dev.coilwise.error.BadInputException ? "error: " + ex.getMessage()
+                    : ExitCode.faultLine(ex, debug));
+            if (debug) {
+                ex.printStackTrace(line.getErr());
+            }
+            return ExitCode.of(ex);
+        });
         return cl;
     }
 

@@ -24,6 +24,24 @@ public final class ExitCode {
     private ExitCode() {
     }
 
+    /**
+     * The one line printed for an internal fault: what kind of fault and its message, on one line whatever the
+     * message holds, and where to look next.
+     */
+    public static String faultLine(Throwable t, boolean debug) {
+        String what = t instanceof StackOverflowError ? "ran out of stack space"
+                : t instanceof OutOfMemoryError ? "ran out of memory (give Java more with -Xmx, e.g. java -Xmx2g -jar ...)"
+                : t.getClass().getSimpleName() + (t.getMessage() == null ? "" : ": " + t.getMessage());
+        String line = what.replaceAll("[\\r\\n\\t]+", " ").strip();
+        if (line.length() > MAX_FAULT_CHARS) {
+            line = line.substring(0, MAX_FAULT_CHARS - 3) + "...";
+        }
+        return "internal fault: " + line + (debug ? "" : " (a bug in coilwise; run again with --debug for the details)");
+    }
+
+    /** Longest fault message printed, characters. */
+    static final int MAX_FAULT_CHARS = 300;
+
     /** Maps an exception to its exit code. */
     public static int of(Throwable t) {
         if (t instanceof BadInputException) {

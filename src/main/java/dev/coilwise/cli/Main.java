@@ -18,12 +18,21 @@ public final class Main {
     public static int run(PrintStream out, PrintStream err, String... args) {
         PrintWriter o = new PrintWriter(new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8), true);
         PrintWriter e = new PrintWriter(new java.io.OutputStreamWriter(err, StandardCharsets.UTF_8), true);
-        CommandLine cl = CoilwiseCommand.commandLine();
-        cl.setOut(o);
-        cl.setErr(e);
-        int code = cl.execute(args);
-        o.flush();
-        e.flush();
-        return code;
+        try {
+            CommandLine cl = CoilwiseCommand.commandLine();
+            cl.setOut(o);
+            cl.setErr(e);
+            return cl.execute(args);
+        } catch (Exception | StackOverflowError | OutOfMemoryError | AssertionError | LinkageError t) {
+            boolean debug = java.util.Arrays.asList(args).contains("--debug");
+            e.println(ExitCode.faultLine(t, debug));
+            if (debug) {
+                t.printStackTrace(e);
+            }
+            return ExitCode.INTERNAL;
+        } finally {
+            o.flush();
+            e.flush();
+        }
     }
 }

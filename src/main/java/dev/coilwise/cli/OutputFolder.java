@@ -2,65 +2,181 @@ package dev.coilwise.cli;
 
 import dev.coilwise.error.BadInputException;
 import java.io.IOException;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
- * Writes a set of output files safely: everything is rendered in memory first, each file goes to a temporary file in
- * the target folder and is then moved over its name, and no output may replace an input file.
+ * Writes a set of output files as one step, or not at all.
+ *
+ * <p>Every file is rendered in memory by the caller first. {@link #commit()} then refuses any name that is not a
+ * plain file name, any output that would replace an input (also through a symbolic link or another spelling of the
+ * same path) and any output over a folder; writes each file to a temporary file in the target folder and flushes it
+ * to disk; moves the files they replace aside; and moves the new files into place. If any step fails, the files
+ * already moved are taken back out and the old ones restored, so the folder is left as it was, and the failure is
+ * reported as bad input (exit 2) naming the folder and the reason.
  */
 final class OutputFolder {
+    /** Moves a file over another; a seam for the tests that make a move fail half-way. */
+    interface Mover {
+        void move(Path from, Path to) throws IOException;
+    }
+
     private final Path dir;
     private final List<Path> inputs;
+    private final Mover mover;
     private final Map<String, byte[]> files = new LinkedHashMap<>();
 
     OutputFolder(Path dir, List<Path> inputs) {
+        this(dir, inputs, OutputFolder::move);
+    }
+
+    OutputFolder(Path dir, List<Path> inputs, Mover mover) {
         this.dir = dir;
-        this.inputs = inputs.stream().map(p -> p.toAbsolutePath().normalize()).toList();
+        this.inputs = List.copyOf(inputs);
+        this.mover = mover;
     }
 
     void add(String name, String text) {
-        files.put(name, text.getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        add(name, text.getBytes(StandardCharsets.UTF_8));
     }
 
     void add(String name, byte[] bytes) {
+        if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals(".") || name.equals("..")
+                || name.startsWith(".")) {
+            throw new IllegalArgumentException("not a plain output file name: " + name);
+        }
         files.put(name, bytes.clone());
     }
 
-    /** Writes every file; returns the paths written. */
-    List<Path> commit() throws IOException {
-        if (Files.exists(dir) && !Files.isDirectory(dir)) {
-            throw new BadInputException("--out " + dir + " exists and is not a folder");
+    /** Writes every file; returns the paths written, in the order added. */
+    List<Path> commit() {
+        check();
+        try {
+            Files.createDirectories(dir);
+        } catch (IOException e) {
+            throw failed("cannot create the folder", e);
         }
-        for (String name : files.keySet()) {
-            Path target = dir.resolve(name).toAbsolutePath().normalize();
-            if (inputs.contains(target)) {
-                throw new BadInputException("--out " + dir + " would overwrite the input file " + target
-                        + "; choose another output folder");
-            }
-        }
-        Files.createDirectories(dir);
-        Map<Path, Path> staged = new LinkedHashMap<>();
+        Map<String, Path> staged = new LinkedHashMap<>();
+        Map<Path, Path> asides = new LinkedHashMap<>();
+        List<Path> placed = new ArrayList<>();
         try {
             for (Map.Entry<String, byte[]> f : files.entrySet()) {
                 Path tmp = Files.createTempFile(dir, "." + f.getKey() + ".", ".tmp");
-                staged.put(tmp, dir.resolve(f.getKey()));
-                Files.write(tmp, f.getValue());
+                staged.put(f.getKey(), tmp);
+                write(tmp, f.getValue());
             }
-            for (Map.Entry<Path, Path> s : staged.entrySet()) {
-                move(s.getKey(), s.getValue());
+            for (String name : files.keySet()) {
+                Path target = dir.resolve(name);
+                if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+                    Path aside = Files.createTempFile(dir, "." + name + ".", ".old");
+                    mover.move(target, aside);
+                    asides.put(target, aside);
+                }
+                mover.move(staged.get(name), target);
+                placed.add(target);
             }
+        } catch (IOException | RuntimeException e) {
+            rollBack(placed, asides);
+            throw failed("cannot write the output files", e);
         } finally {
-            for (Path tmp : staged.keySet()) {
-                Files.deleteIfExists(tmp);
+            for (Path tmp : staged.values()) {
+                deleteQuietly(tmp);
             }
         }
-        return List.copyOf(staged.values());
+        asides.values().forEach(OutputFolder::deleteQuietly);
+        return List.copyOf(placed);
+    }
+
+    /** Refuses outputs that are folders or inputs, before anything is written. */
+    private void check() {
+        if (Files.exists(dir) && !Files.isDirectory(dir)) {
+            throw new BadInputException("--out " + dir + " exists and is not a folder; choose a folder");
+        }
+        List<Path> in = inputs.stream().map(OutputFolder::canonical).toList();
+        for (String name : files.keySet()) {
+            Path target = dir.resolve(name);
+            if (in.contains(canonical(target)) || isSameFileAsAnInput(target)) {
+                throw new BadInputException("--out " + dir + " would overwrite the input file " + target
+                        + "; choose another output folder");
+            }
+            if (Files.isDirectory(target, LinkOption.NOFOLLOW_LINKS)) {
+                throw new BadInputException("--out " + dir + " holds a folder named " + name
+                        + " where coilwise writes a file; remove it or choose another output folder");
+            }
+        }
+    }
+
+    private boolean isSameFileAsAnInput(Path target) {
+        if (!Files.exists(target)) {
+            return false;
+        }
+        for (Path input : inputs) {
+            try {
+                if (Files.exists(input) && Files.isSameFile(input, target)) {
+                    return true;
+                }
+            } catch (IOException e) {
+                return true; // cannot tell: refuse rather than risk an input
+            }
+        }
+        return false;
+    }
+
+    /** The real path where it exists (links and folder links followed), else the absolute normal path. */
+    private static Path canonical(Path p) {
+        Path abs = p.toAbsolutePath().normalize();
+        Optional<Path> realParent = Optional.ofNullable(abs.getParent()).flatMap(OutputFolder::real);
+        return real(abs).orElse(realParent.map(rp -> rp.resolve(abs.getFileName())).orElse(abs));
+    }
+
+    private static Optional<Path> real(Path p) {
+        try {
+            return Optional.of(p.toRealPath());
+        } catch (IOException e) {
+            return Optional.empty();
+        }
+    }
+
+    private static void write(Path tmp, byte[] bytes) throws IOException {
+        try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
+            java.nio.ByteBuffer buf = java.nio.ByteBuffer.wrap(bytes);
+            while (buf.hasRemaining()) {
+                ch.write(buf);
+            }
+            ch.force(true);
+        }
+    }
+
+    /** Takes out the new files already in place and puts the old ones back. */
+    private static void rollBack(List<Path> placed, Map<Path, Path> asides) {
+        for (Path p : placed) {
+            deleteQuietly(p);
+        }
+        asides.forEach((target, aside) -> {
+            try {
+                move(aside, target);
+            } catch (IOException e) {
+                // the old file stays under its temporary name beside the target; nothing more can be done here
+            }
+        });
+    }
+
+    private BadInputException failed(String what, Exception e) {
+        String reason = e instanceof FileSystemException fse && fse.getReason() != null ? fse.getReason()
+                : e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        return new BadInputException("--out " + dir + ": " + what + " (" + reason + "); the folder was left as it was");
     }
 
     private static void move(Path from, Path to) throws IOException {
@@ -68,6 +184,14 @@ final class OutputFolder {
             Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
         } catch (AtomicMoveNotSupportedException e) {
             Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
+        }
+    }
+
+    private static void deleteQuietly(Path p) {
+        try {
+            Files.deleteIfExists(p);
+        } catch (IOException e) {
+            // a leftover temporary file (hidden, ending .tmp or .old) is harmless
         }
     }
 }

@@ -59,12 +59,18 @@ public record Material(String key, String name, String standard, boolean steel, 
         return strength.stream().anyMatch(b -> b.contains(d));
     }
 
-    private void requireCovered(double d) {
+    /**
+     * Checks that the fit covers wire diameter {@code d}, m, and returns it.
+     *
+     * @throws BadInputException naming the diameter and the material's range when it does not
+     */
+    public double requireCovered(double d) {
         Check.positive("wire diameter", d, "m");
         if (!covers(d)) {
             throw BadInputException.of(Message.WIRE_OUT_OF_MATERIAL_RANGE, d * 1e3, key, minDiameter() * 1e3,
                     maxDiameter() * 1e3);
         }
+        return d;
     }
 
     /**

@@ -14,7 +14,8 @@ import dev.coilwise.model.Spring;
 public final class Buckling {
     /**
      * Coefficient of the absolute-stability length of steel springs, L0 &lt; 2.63·D/α (Shigley's MED 9th ed.,
-     * Eq. 10-13, from memory; it is π·√(2(E − G)/(2G + E)) for E = 30 Mpsi, G = 11.5 Mpsi).
+     * Eq. 10-13, from memory; it is π·√(2(E − G)/(2G + E)) = 2.626 for E = 207 GPa, G = 79.3 GPa, the steel
+     * constants of the same book's Table A-5).
      */
     public static final double STEEL_STABILITY_COEFFICIENT = 2.63;
 

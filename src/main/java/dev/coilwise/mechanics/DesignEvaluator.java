@@ -27,6 +27,19 @@ public final class DesignEvaluator {
     private DesignEvaluator() {
     }
 
+    /**
+     * Evaluates a spring against a requirement.
+     *
+     * <p>Arrest: the preload deflection is L0 − pocket length (when a pocket is given and shorter than L0); the
+     * working deflection is the root of the arrest balance; peak force F0 + k·x. Launch: the working deflection is
+     * the cocked compression that throws the payload to the required height; the peak force is the cocking force.
+     * Each margin is {@code (allowed − actual)/|allowed|} for an upper limit and {@code (actual − required)/|required|}
+     * for a lower one: positive is spare, negative is over.
+     *
+     * @param s   the spring as ordered
+     * @param req the requirement (job, limits, envelope and design rules)
+     * @return every working figure and margin; never null
+     */
     public static Evaluation evaluate(Spring s, Requirement req) {
         SpringOptions opt = req.spring();
         Envelope env = req.envelope();

@@ -1,9 +1,11 @@
 package dev.coilwise.mechanics;
 
+import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.Check;
 import dev.coilwise.model.Spring;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * Cycle life of a helical compression spring working between two forces. Pure and thread-safe.
@@ -54,8 +56,8 @@ public final class Fatigue {
                                      double staticAllowable) {
         Check.nonNegative("smallest working force", minForce, "N");
         if (maxForce < minForce) {
-            throw new dev.coilwise.error.BadInputException("largest working force " + maxForce
-                    + " N is below the smallest working force " + minForce + " N");
+            throw new BadInputException(String.format(Locale.ROOT,
+                    "largest working force %.6g N must not be below the smallest working force %.6g N", maxForce, minForce));
         }
         double d = spring.wireDiameter();
         double dm = spring.meanDiameter();

@@ -1,6 +1,7 @@
 package dev.coilwise.mechanics;
 
 import dev.coilwise.error.Check;
+import dev.coilwise.error.InternalFaultException;
 
 /**
  * The fatigue verdict on a spring working between two forces for a number of cycles. SI throughout.
@@ -19,7 +20,7 @@ public record FatigueCheck(double safetyFactor, String criterion, double stressA
     public FatigueCheck {
         Check.notNull("fatigue criterion", criterion);
         if (Double.isNaN(safetyFactor) || safetyFactor < 0) {
-            throw new dev.coilwise.error.InternalFaultException("fatigue safety factor must be ≥ 0, got " + safetyFactor);
+            throw new InternalFaultException("fatigue safety factor must be ≥ 0, got " + safetyFactor);
         }
         Check.nonNegative("stress amplitude", stressAmplitude, "Pa");
         Check.nonNegative("mean stress", stressMean, "Pa");

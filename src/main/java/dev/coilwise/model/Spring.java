@@ -6,7 +6,9 @@ import dev.coilwise.error.Message;
 import dev.coilwise.materials.Material;
 
 /**
- * A round-wire helical compression spring as it would be ordered. All lengths in m.
+ * A round-wire helical compression spring as it would be ordered. All lengths in m. The wire diameter must lie in
+ * the material's range (no extrapolation of its fits), the index D/d must exceed 1 (a positive inner diameter) and
+ * the free length must exceed the solid length.
  *
  * @param material     wire material
  * @param ends         end treatment
@@ -17,16 +19,19 @@ import dev.coilwise.materials.Material;
  */
 public record Spring(Material material, EndType ends, double wireDiameter, double meanDiameter, double activeCoils,
                      double freeLength) {
+    /** Smallest spring index D/d a coil can have: at 1 the inner diameter D − d closes to nothing (geometry). */
+    public static final double MIN_INDEX = 1;
 
     public Spring {
         Check.notNull("material", material);
         Check.notNull("end type", ends);
         Check.positive("wire diameter", wireDiameter, "m");
+        material.requireCovered(wireDiameter);
         Check.positive("mean coil diameter", meanDiameter, "m");
         Check.positive("active coils", activeCoils, "");
         Check.positive("free length", freeLength, "m");
-        if (meanDiameter <= 0.75 * wireDiameter) {
-            throw BadInputException.of(Message.INDEX_TOO_LOW, meanDiameter / wireDiameter);
+        if (meanDiameter <= MIN_INDEX * wireDiameter) {
+            throw BadInputException.of(Message.SPRING_INDEX_TOO_LOW, meanDiameter / wireDiameter);
         }
         double ls = ends.solidLength(wireDiameter, ends.totalCoils(activeCoils));
         if (freeLength <= ls) {

@@ -81,6 +81,11 @@ public record DisplayUnits(UnitSystem system) {
         return us() ? fmt("%.3f", length(m)) : fmt("%.1f", length(m));
     }
 
+    /** A wire diameter: 0.01 mm or 0.0001 in, as wire sizes are written. */
+    public String wireWithUnit(double m) {
+        return (us() ? fmt("%.4f", length(m)) : fmt("%.2f", length(m))) + " " + lengthUnit();
+    }
+
     public String lenWithUnit(double m) {
         return len(m) + " " + lengthUnit();
     }

@@ -59,8 +59,8 @@ public final class EvaluationReport {
         for (Margin m : e.margins()) {
             String value = Double.isInfinite(m.value()) ? "unbounded" : DisplayUnits.fmt("%+.1f %%", m.value() * 100);
             String verdict = m.holds() ? "ok" : m.hard() ? "FAILS" : "exceeded (reported only)";
-            sb.append(DisplayUnits.fmt("  %-16s %12s  %-24s%s%n", m.key(), value, verdict,
-                    m.key().equals(binding) ? "  <- binding" : ""));
+            sb.append(DisplayUnits.fmt("  %-16s %12s  %-24s%s", m.key(), value, verdict,
+                    m.key().equals(binding) ? "  <- binding" : "").stripTrailing()).append('\n');
             if (!m.holds()) {
                 sb.append("      ").append(Relaxation.describe(m, req, u)).append('\n');
             }

@@ -2,6 +2,8 @@ package dev.coilwise.report;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.coilwise.dynamics.SimulationSummary;
+import dev.coilwise.dynamics.TimeHistory;
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.mechanics.Margin;
 import dev.coilwise.model.Arrest;
@@ -11,11 +13,14 @@ import dev.coilwise.model.Limits;
 import dev.coilwise.model.Requirement;
 import dev.coilwise.model.Spring;
 import dev.coilwise.model.SpringOptions;
+import dev.coilwise.search.Candidate;
 import dev.coilwise.search.Diagnosis;
+import dev.coilwise.search.LimitConflict;
 import dev.coilwise.search.NearMiss;
 import dev.coilwise.search.SearchResult;
 import dev.coilwise.search.ShortlistEntry;
 import dev.coilwise.search.SizingResult;
+import dev.coilwise.tolerance.TestPoint;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 
@@ -23,6 +28,8 @@ import java.io.UncheckedIOException;
 public final class ShortlistJson {
     /** Format version of shortlist.json. */
     public static final int FORMAT = 1;
+    /** Most rows of a time history kept in shortlist.json (enough for a chart; the full one is simulate's CSV). */
+    public static final int HISTORY_ROWS = 240;
 
     private ShortlistJson() {
     }
@@ -43,9 +50,11 @@ public final class ShortlistJson {
         root.set("requirement", requirement(r.requirement()));
         root.set("search", search(r.search()));
         ArrayNode designs = root.putArray("designs");
+        int grade = r.requirement().spring().toleranceGrade();
         for (ShortlistEntry e : r.shortlist()) {
-            designs.add(design(e));
+            designs.add(design(e, grade));
         }
+        root.set("feasible_families", families(r));
         if (r.diagnosis().isPresent()) {
             root.set("diagnosis", diagnosis(r.diagnosis().get(), r.requirement()));
         }
@@ -107,11 +116,15 @@ public final class ShortlistJson {
         sp.put("seating", o.seating().key());
         sp.put("wire_series", req.wireSeries().name().toLowerCase(java.util.Locale.ROOT));
         Json.put(sp, "cycles", o.cycles().orElse(Double.NaN));
+        Json.put(sp, "fatigue_margin", o.fatigueMargin());
         sp.put("shot_peened", o.shotPeened());
         sp.put("tolerance_grade", o.toleranceGrade());
         ObjectNode rk = n.putObject("ranking");
         rk.put("by", req.ranking().by().key());
         rk.put("shortlist", req.ranking().shortlist());
+        rk.put("prefer", req.ranking().prefer().name().toLowerCase(java.util.Locale.ROOT));
+        rk.put("dynamics", req.ranking().dynamicsStrict() ? "strict" : "warn");
+        Json.put(rk, "min_probability", req.ranking().minProbability().orElse(Double.NaN));
         return n;
     }
 
@@ -130,12 +143,57 @@ public final class ShortlistJson {
         return n;
     }
 
-    static ObjectNode design(ShortlistEntry entry) {
+    /**
+     * The best custom design of every family that has a feasible one, in the order of the ranking criterion, with
+     * {@code shortlist_rank} on those that made the shortlist: a few figures each, enough to draw the trade-off
+     * between families without searching again.
+     */
+    static ArrayNode families(SizingResult r) {
+        java.util.Map<Integer, Integer> shortlisted = new java.util.HashMap<>();
+        for (ShortlistEntry e : r.shortlist()) {
+            if (!e.candidate().isStock()) {
+                shortlisted.put(e.candidate().family().order(), e.rank());
+            }
+        }
+        ArrayNode arr = Json.MAPPER.createArrayNode();
+        for (int i = 0; i < r.search().best().size(); i++) {
+            Candidate c = r.search().best().get(i);
+            Evaluation e = c.evaluation();
+            Spring sp = e.spring();
+            ObjectNode o = arr.addObject();
+            o.put("search_rank", i + 1);
+            Integer rank = shortlisted.get(c.family().order());
+            if (rank != null) {
+                o.put("shortlist_rank", rank);
+            }
+            o.put("material", sp.material().key());
+            o.put("ends", sp.ends().key());
+            Json.put(o, "wire_diameter_mm", sp.wireDiameter() * 1e3);
+            Json.put(o, "outer_diameter_mm", sp.outerDiameter() * 1e3);
+            Json.put(o, "free_length_mm", sp.freeLength() * 1e3);
+            Json.put(o, "solid_length_mm", sp.solidLength() * 1e3);
+            Json.put(o, "mass_g", e.mass() * 1e3);
+            Json.put(o, "arrest".equals(e.job()) ? "peak_force_N" : "cocking_force_N", e.peakForce());
+        }
+        return arr;
+    }
+
+    static ObjectNode design(ShortlistEntry entry, int grade) {
         Evaluation e = entry.evaluation();
         Spring s = e.spring();
         ObjectNode n = Json.MAPPER.createObjectNode();
         n.put("rank", entry.rank());
-        n.put("source", "custom");
+        n.put("source", entry.candidate().isStock() ? "stock" : "custom");
+        entry.candidate().stock().ifPresent(p -> {
+            n.put("part_number", p.partNumber());
+            n.put("supplier", p.supplier());
+            Json.put(n, "unit_price", p.unitPrice());
+            n.put("currency", p.currency());
+            n.put("pack_quantity", p.packQuantity());
+            n.put("catalogue_row", p.source());
+            ArrayNode flags = n.putArray("catalogue_flags");
+            p.flags().forEach(f -> flags.add(f.toString()));
+        });
         n.put("material", s.material().key());
         n.put("material_standard", s.material().standard());
         n.put("ends", s.ends().key());
@@ -179,8 +237,105 @@ public final class ShortlistJson {
             n.put("binding_limit", b.key());
             Json.put(n, "binding_margin_pct", b.value() * 100);
         });
+        e.fatigue().ifPresent(f -> {
+            ObjectNode fn = n.putObject("fatigue");
+            Json.put(fn, "safety_factor", f.safetyFactor());
+            fn.put("criterion", f.criterion());
+            Json.put(fn, "stress_amplitude_MPa", f.stressAmplitude() * 1e-6);
+            Json.put(fn, "stress_mean_MPa", f.stressMean() * 1e-6);
+        });
+        entry.scatter().ifPresent(sc -> {
+            ObjectNode sn = n.putObject("scatter");
+            sn.put("samples", sc.samples());
+            sn.put("seed", sc.seed());
+            Json.put(sn, "probability_ok", sc.probabilityOk());
+            ObjectNode p01 = sn.putObject("p01");
+            sc.p01().forEach((k, v) -> Json.put(p01, k, v));
+            ObjectNode p99 = sn.putObject("p99");
+            sc.p99().forEach((k, v) -> Json.put(p99, k, v));
+        });
+        ArrayNode loads = n.putArray("test_loads");
+        for (TestPoint tp : TestLoads.of(e, grade)) {
+            ObjectNode t = loads.addObject();
+            t.put("name", tp.name());
+            Json.put(t, "length_mm", tp.length() * 1e3);
+            Json.put(t, "force_N", tp.force());
+            Json.put(t, "force_tolerance_N", tp.forceTolerance());
+            t.put("grade", tp.grade());
+        }
+        entry.simulation().ifPresent(sim -> {
+            ObjectNode sn = simulation(sim, "arrest".equals(e.job()));
+            if (!entry.history().isEmpty()) {
+                sn.set("history", history(entry.history()));
+            }
+            n.set("simulation", sn);
+        });
         n.set("margins", margins(e));
         return n;
+    }
+
+    static ObjectNode simulation(SimulationSummary sim, boolean arrest) {
+        ObjectNode s = Json.MAPPER.createObjectNode();
+        s.put("masses", sim.masses());
+        Json.put(s, "max_compression_mm", sim.maxCompression() * 1e3);
+        Json.put(s, "peak_force_N", sim.peakForce());
+        Json.put(s, "peak_stress_MPa", sim.peakStress() * 1e-6);
+        s.put("coil_clash", sim.coilClash());
+        if (sim.coilClash()) {
+            Json.put(s, "first_clash_ms", sim.firstClashTime() * 1e3);
+            s.put("first_clash_element", sim.firstClashElement());
+        }
+        Json.put(s, "deviation_pct", sim.deviationPct());
+        if (arrest) {
+            Json.put(s, "stop_time_ms", sim.stopTime() * 1e3);
+            Json.put(s, "rebound_speed_m_per_s", sim.reboundSpeed());
+        } else {
+            Json.put(s, "exit_speed_m_per_s", sim.exitSpeed());
+            Json.put(s, "apex_mm", sim.apex() * 1e3);
+        }
+        ArrayNode flags = s.putArray("flags");
+        sim.flags().forEach(flags::add);
+        ArrayNode notes = s.putArray("notes");
+        sim.notes().forEach(notes::add);
+        return s;
+    }
+
+    /**
+     * The time history, thinned to at most {@link #HISTORY_ROWS} rows for charts: evenly spaced rows, plus the first
+     * and last and the rows of the largest travel and the largest force, so the peaks survive the thinning.
+     */
+    static ObjectNode history(TimeHistory h) {
+        double[] t = h.time();
+        double[] x = h.loadPosition();
+        double[] f = h.topForce();
+        java.util.TreeSet<Integer> rows = new java.util.TreeSet<>();
+        int stride = Math.max(1, (int) Math.ceil(t.length / (double) (HISTORY_ROWS - 3)));
+        for (int i = 0; i < t.length; i += stride) {
+            rows.add(i);
+        }
+        rows.add(t.length - 1);
+        rows.add(argMax(x));
+        rows.add(argMax(f));
+        ObjectNode n = Json.MAPPER.createObjectNode();
+        ArrayNode time = n.putArray("time_ms");
+        ArrayNode travel = n.putArray("load_position_mm");
+        ArrayNode force = n.putArray("top_force_N");
+        for (int i : rows) {
+            time.add(Json.num(t[i] * 1e3));
+            travel.add(Json.num(x[i] * 1e3));
+            force.add(Json.num(f[i]));
+        }
+        return n;
+    }
+
+    private static int argMax(double[] v) {
+        int best = 0;
+        for (int i = 1; i < v.length; i++) {
+            if (v[i] > v[best]) {
+                best = i;
+            }
+        }
+        return best;
     }
 
     static ArrayNode margins(Evaluation e) {
@@ -204,6 +359,18 @@ public final class ShortlistJson {
         n.put("sampled", d.sampled());
         ObjectNode rb = n.putObject("removed_by");
         d.removedBy().forEach(rb::put);
+        ArrayNode conflicts = n.putArray("no_spring_can");
+        for (LimitConflict c : d.conflicts()) {
+            ObjectNode o = conflicts.addObject();
+            boolean decel = c.limit().equals("deceleration");
+            o.put("limit", c.limit());
+            o.put("unit", decel ? "gn" : "N");
+            Json.put(o, "allowed", decel ? DisplayUnits.gn(c.allowed()) : c.allowed());
+            Json.put(o, "least_needed", decel ? DisplayUnits.gn(c.leastNeeded()) : c.leastNeeded());
+            Json.put(o, "least_with_preload", decel ? DisplayUnits.gn(c.withPreload()) : c.withPreload());
+            Json.put(o, "stroke_needed_mm", c.strokeNeeded() * 1e3);
+            o.put("advice", LimitConflictWords.describe(c, req, u));
+        }
         ArrayNode near = n.putArray("nearest_misses");
         for (NearMiss m : d.nearest()) {
             ObjectNode o = near.addObject();

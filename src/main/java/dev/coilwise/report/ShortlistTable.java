@@ -17,6 +17,25 @@ public final class ShortlistTable {
     private ShortlistTable() {
     }
 
+    /** What failing each limit means, for the diagnosis. */
+    static final Map<String, String> LIMIT_WORDS = Map.ofEntries(
+            Map.entry("stroke", "compress further than limits.stroke"),
+            Map.entry("peak_force", "exceed limits.peak_force"),
+            Map.entry("deceleration", "exceed limits.deceleration"),
+            Map.entry("coil_bind", "close solid before the end of the stroke (with the clash allowance)"),
+            Map.entry("stress_working", "are over-stressed at the working deflection"),
+            Map.entry("stress_solid", "are over-stressed when compressed solid (spring.solid_safe)"),
+            Map.entry("fit_bore", "grow too wide for envelope.bore at solid"),
+            Map.entry("fit_rod", "are too tight on envelope.rod"),
+            Map.entry("free_length", "are longer than envelope.max_free_length"),
+            Map.entry("pocket", "are shorter than envelope.pocket_length"),
+            Map.entry("buckling", "buckle unguided"),
+            Map.entry("surge", "meet the load faster than a wave can travel along the coils (surge)"),
+            Map.entry("index", "fall outside spring.index"),
+            Map.entry("active_coils", "fall outside spring.active_coils"),
+            Map.entry("fatigue", "fall short of spring.fatigue_margin"),
+            Map.entry("min_probability", "fall short of ranking.min_probability under manufacturing scatter"));
+
     public static String write(SizingResult r, DisplayUnits u) {
         StringBuilder sb = new StringBuilder();
         sb.append(summary(r.requirement(), u)).append('\n');
@@ -30,21 +49,55 @@ public final class ShortlistTable {
         } else {
             sb.append('\n').append("NO FEASIBLE DESIGN: no spring on the grid meets every limit.\n");
             r.diagnosis().ifPresent(d -> {
-                sb.append("Limits that removed the sampled candidates (").append(d.sampled()).append(" sampled):\n");
+                if (!d.conflicts().isEmpty()) {
+                    sb.append("No spring can meet these limits, whatever its material, size or ends (work-energy balance):\n");
+                    d.conflicts().forEach(c -> sb.append("  ").append(LimitConflictWords.describe(c, r.requirement(), u))
+                            .append('\n'));
+                }
+                if (r.search().evaluated() == 0) {
+                    sb.append("The search's bounds ruled out every candidate before evaluating one; the diagnosis samples"
+                            + " the design space instead.\n");
+                }
+                sb.append("Limits that removed the sampled candidates (").append(d.sampled()).append(" sampled; a candidate"
+                        + " may fail several):\n");
                 for (Map.Entry<String, Long> en : d.removedBy().entrySet()) {
-                    sb.append(DisplayUnits.fmt("  %-16s %d%n", en.getKey(), en.getValue()));
+                    sb.append(DisplayUnits.fmt("  %-16s %7d  %s%n", en.getKey(), en.getValue(), LIMIT_WORDS.getOrDefault(
+                            en.getKey(), "")));
+                }
+                if (d.nearest().isEmpty() && d.removedBy().size() > 1) {
+                    List<String> leading = d.removedBy().keySet().stream().limit(2).toList();
+                    sb.append("No sampled design fails only one limit: relax the leading ones together (")
+                            .append(String.join(" and ", leading)).append(").\n");
                 }
                 if (!d.nearest().isEmpty()) {
                     sb.append("Nearest misses (each fails one limit):\n");
                     for (NearMiss m : d.nearest()) {
                         Spring s = m.evaluation().spring();
                         sb.append("  ").append(s.material().key()).append(' ').append(s.ends().key())
-                                .append(" d ").append(u.lenWithUnit(s.wireDiameter())).append(", OD ")
+                                .append(" d ").append(u.wireWithUnit(s.wireDiameter())).append(", OD ")
                                 .append(u.lenWithUnit(s.outerDiameter())).append(": ")
                                 .append(Relaxation.describe(m.violated(), r.requirement(), u)).append('\n');
                     }
                 }
             });
+        }
+        r.shortlist().stream().filter(en -> en.candidate().isStock()).forEach(en -> {
+            var p = en.candidate().stock().get();
+            sb.append(en.rank()).append("S = stock part ").append(p.partNumber()).append(" from ").append(p.supplier())
+                    .append(DisplayUnits.fmt(", %.2f %s each", p.unitPrice(), p.currency())).append('\n');
+        });
+        if (r.shortlist().stream().anyMatch(en -> en.simulation().isPresent())) {
+            sb.append("sim dev: largest difference of the time-domain simulation (a spring with mass) from the energy"
+                    + " balance; 'clash' = coils touched during the event.\n");
+        }
+        r.shortlist().stream().filter(en -> en.scatter().isPresent()).findFirst().ifPresent(en -> sb.append(
+                DisplayUnits.fmt("P ok: share of %d springs made to EN 15800 grade %d tolerances (seeded Monte Carlo)"
+                        + " that still meet every limit.%n", en.scatter().get().samples(),
+                        r.requirement().spring().toleranceGrade())));
+        if (r.shortlist().stream().anyMatch(en -> en.scatter().map(sc -> sc.probabilityOk() < 0.5).orElse(false))
+                && r.requirement().ranking().minProbability().isEmpty()) {
+            sb.append("Designs ranked first sit on their binding limit, so many springs made to tolerance miss it: for"
+                    + " margin, rank by robustness (ranking.by: robustness) or set ranking.min_probability.\n");
         }
         if (!r.warnings().isEmpty()) {
             sb.append("\nNotes:\n");
@@ -97,17 +150,20 @@ public final class ShortlistTable {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"#", "material", "ends", "d " + l, "OD " + l, "Na", "L0 " + l, "Ls " + l,
             "rate " + u.rateUnit(), (arrest ? "x_max " : "x_cock ") + l, (arrest ? "F_peak " : "F_cock ") + u.forceUnit(),
-            arrest ? "decel gn" : "H " + l, "mass " + u.springMassUnit(), "binding limit"});
+            arrest ? "decel gn" : "H " + l, "mass " + u.springMassUnit(), "P ok", "sim dev", "binding limit"});
         for (ShortlistEntry en : r.shortlist()) {
             Evaluation e = en.evaluation();
             Spring s = e.spring();
-            rows.add(new String[] {String.valueOf(en.rank()), s.material().key(), s.ends().key(),
+            rows.add(new String[] {en.rank() + (en.candidate().isStock() ? "S" : ""), s.material().key(), s.ends().key(),
                 u.us() ? DisplayUnits.fmt("%.4f", u.length(s.wireDiameter())) : DisplayUnits.fmt("%.2f", u.length(s.wireDiameter())),
                 u.len(s.outerDiameter()), DisplayUnits.fmt("%.2f", s.activeCoils()), u.len(s.freeLength()),
                 u.len(s.solidLength()), DisplayUnits.sig(u.rate(e.rate())), u.len(e.workingDeflection()),
                 DisplayUnits.sig(u.force(e.peakForce())),
                 arrest ? DisplayUnits.sig(DisplayUnits.gn(e.peakDeceleration())) : u.len(e.predictedHeight()),
                 DisplayUnits.sig(u.springMass(e.mass())),
+                en.scatter().map(sc -> DisplayUnits.fmt("%.1f%%", sc.probabilityOk() * 100)).orElse("-"),
+                en.simulation().map(sim -> DisplayUnits.fmt("%+.1f%%", sim.deviationPct())
+                        + (sim.coilClash() ? " clash" : "")).orElse("-"),
                 e.binding().map(b -> b.key() + " " + DisplayUnits.fmt("%+.1f%%", b.value() * 100)).orElse("")});
         }
         int[] w = new int[rows.get(0).length];

@@ -4,6 +4,7 @@ import java.util.Objects;
 
 /**
  * One problem found in an input file, with its position, in the form compilers use so editors can jump to it.
+ * Control characters in the key and message (quoted from a file) are escaped, so a problem prints on one line.
  *
  * @param file    file name as given by the user (or a label such as {@code <template>})
  * @param line    1-based line, or 0 when the problem concerns the whole file
@@ -15,7 +16,8 @@ public record InputProblem(String file, int line, int column, String key, String
     public InputProblem {
         Objects.requireNonNull(file, "file");
         Objects.requireNonNull(message, "message");
-        key = key == null ? "" : key;
+        key = key == null ? "" : Shown.escape(key);
+        message = Shown.escape(message);
     }
 
     /** {@code file:line:column: key: message}; the key part is left out when there is no key. */

@@ -1,5 +1,6 @@
 package dev.coilwise.requirement;
 
+import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.Message;
 import dev.coilwise.mechanics.ArrestBalance;
 import dev.coilwise.model.Arrest;
@@ -68,8 +69,10 @@ final class JobReader {
             return OptionalDouble.empty();
         }
         Section l = load.get();
-        OptionalDouble mass = l.quantity("mass", QuantityKind.MASS, Sign.POSITIVE);
-        OptionalDouble weight = l.quantity("weight", QuantityKind.FORCE, Sign.POSITIVE);
+        OptionalDouble mass = swapped(l, "mass", QuantityKind.FORCE, "load.weight", QuantityKind.MASS) ? OptionalDouble.empty()
+                : l.quantity("mass", QuantityKind.MASS, Sign.POSITIVE);
+        OptionalDouble weight = swapped(l, "weight", QuantityKind.MASS, "load.mass", QuantityKind.FORCE) ? OptionalDouble.empty()
+                : l.quantity("weight", QuantityKind.FORCE, Sign.POSITIVE);
         if (l.has("mass") && l.has("weight")) {
             l.problem("weight", Message.BOTH_GIVEN.format("load.mass", "load.weight"));
             return OptionalDouble.empty();
@@ -82,6 +85,22 @@ final class JobReader {
             return OptionalDouble.of(weight.getAsDouble() / Gravity.STANDARD); // weight in standard gravity
         }
         return mass;
+    }
+
+    /** A mass written under weight or a weight under mass: reported with the key it belongs under. */
+    private static boolean swapped(Section l, String name, QuantityKind other, String otherKey, QuantityKind own) {
+        Optional<YamlNode> n = l.node(name);
+        if (n.isEmpty() || !(n.get() instanceof YamlNode.Scalar s)) {
+            return false;
+        }
+        try {
+            Quantities.measure(s.text(), other);
+        } catch (BadInputException e) {
+            return false;
+        }
+        l.problem(name, Message.UNDER_OTHER_KEY.format(Shown.value(s.text()), other.description(), otherKey,
+                own.description() + " such as " + own.examples()));
+        return true;
     }
 
     private static Optional<Job> arrest(Section m, OptionalDouble mass) {
@@ -134,12 +153,13 @@ final class JobReader {
         if (node.isEmpty()) {
             return OptionalDouble.empty();
         }
-        String text = node.get().text().strip();
+        String text = node.get().text();
         if (words.containsKey(text)) {
             return OptionalDouble.of(words.get(text));
         }
-        if (!text.isEmpty() && Character.isLetter(text.charAt(0))) {
-            s.problem("direction", Message.NOT_A_CHOICE.format(text, Suggest.hint(text, words.keySet()), allowed));
+        String trimmed = Grammar.trim(text);
+        if (!trimmed.isEmpty() && Character.isLetter(trimmed.charAt(0))) {
+            s.problem("direction", Message.NOT_A_CHOICE.format(Shown.value(text), Suggest.hint(text, words.keySet()), allowed));
             return OptionalDouble.empty();
         }
         OptionalDouble a = s.quantityOf(node.get(), s.key("direction"), QuantityKind.ANGLE, Sign.ANY);
@@ -154,7 +174,7 @@ final class JobReader {
             return OptionalDouble.of(-Math.PI / 2);
         }
         if (v < low || v > Math.PI / 2) {
-            s.problem("direction", Message.NOT_IN_RANGE.format(lowText, "90 deg", text));
+            s.problem("direction", Message.NOT_IN_RANGE.format(lowText, "90 deg", Shown.value(text)));
             return OptionalDouble.empty();
         }
         return a;

@@ -69,6 +69,9 @@ final class LimitsReader {
         }
         if (bore.isPresent() && rod.isPresent() && clearance.isPresent()) {
             ok &= room(s, bore.getAsDouble(), rod.getAsDouble(), clearance.get());
+        } else if (bore.isPresent() && clearance.isPresent() && bore.getAsDouble() - clearance.get().of(bore.getAsDouble()) <= 0) {
+            s.problem("clearance", Message.NO_ROOM_IN_BORE.format(s.raw("clearance"), s.raw("bore")));
+            ok = false;
         }
         if (free.isPresent() && pocket.isPresent() && pocket.getAsDouble() > free.getAsDouble()) {
             s.problem("pocket_length", Message.MUST_NOT_EXCEED.format(s.raw("pocket_length"), "envelope.max_free_length",

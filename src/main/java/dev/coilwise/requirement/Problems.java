@@ -3,6 +3,7 @@ package dev.coilwise.requirement;
 import dev.coilwise.error.Message;
 import dev.coilwise.model.UnitSystem;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 
 /**
@@ -15,6 +16,7 @@ final class Problems {
 
     private final String file;
     private final List<InputProblem> list = new ArrayList<>();
+    private final List<InputProblem> schema = new ArrayList<>();
     private int siQuantities;
     private int usQuantities;
 
@@ -34,19 +36,53 @@ final class Problems {
         }
     }
 
-    boolean isEmpty() {
-        return list.isEmpty();
+    /**
+     * Adds a problem found by the schema check. It is reported only when the reader's own checks find nothing at
+     * the same key or at a key above it: the reader's message for the same mistake is the more precise (it knows the
+     * units, the dimension, the other keys), and one mistake should be reported once.
+     */
+    void addSchema(YamlNode.Position at, String key, String message) {
+        schema.add(new InputProblem(file, at.line(), at.column(), key, message));
     }
 
+    boolean isEmpty() {
+        return all().isEmpty();
+    }
+
+    /** The reader's own problems so far (without the schema's). */
     List<InputProblem> list() {
         return List.copyOf(list);
     }
 
+    /** The problems the schema check found, before they are merged with the reader's. */
+    List<InputProblem> schemaList() {
+        return List.copyOf(schema);
+    }
+
+    /** The reader's problems and the schema's that the reader did not report at the same or a higher key. */
+    List<InputProblem> all() {
+        List<InputProblem> merged = new ArrayList<>(list);
+        for (InputProblem p : schema) {
+            boolean covered = list.stream().anyMatch(r -> r.key().equals(p.key()) || p.key().startsWith(r.key() + ".")
+                    || r.key().isEmpty() && r.line() == p.line() && r.column() == p.column());
+            if (!covered) {
+                merged.add(p);
+            }
+        }
+        if (merged.size() > MAX_PROBLEMS) {
+            InputProblem first = merged.get(MAX_PROBLEMS);
+            merged = new ArrayList<>(merged.subList(0, MAX_PROBLEMS));
+            merged.add(new InputProblem(file, first.line(), first.column(), "", Message.TOO_MANY_PROBLEMS.format(MAX_PROBLEMS)));
+        }
+        return merged;
+    }
+
     /** Throws every problem collected so far, if any, in file order (line, then column). */
     void throwIfAny() {
-        if (!list.isEmpty()) {
-            List<InputProblem> sorted = new ArrayList<>(list);
-            sorted.sort(java.util.Comparator.comparingInt(InputProblem::line).thenComparingInt(InputProblem::column));
+        List<InputProblem> all = all();
+        if (!all.isEmpty()) {
+            List<InputProblem> sorted = new ArrayList<>(all);
+            sorted.sort(Comparator.comparingInt(InputProblem::line).thenComparingInt(InputProblem::column));
             throw new RequirementException(file, sorted);
         }
     }

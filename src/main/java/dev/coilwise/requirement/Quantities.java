@@ -27,7 +27,10 @@ import tech.units.indriya.unit.Units;
  * N/mm ...) plus the customary units of the trade registered here. The inch-pound definitions are exact:
  * 1 in = 0.0254 m and 1 lb = 0.45359237 kg (international yard and pound agreement, 1959; NIST SP 811, 2008 ed.,
  * App. B), gn = 9.80665 m/s² (CGPM 1901), so 1 lbf = 0.45359237 kg × gn = 4.4482216152605 N exactly and
- * 1 psi = 1 lbf/in².
+ * 1 psi = 1 lbf/in²; the tonne, t = 1000 kg (SI Brochure, 9th ed., Table 8).
+ *
+ * <p>Of all the units Indriya understands, only those listed by {@link QuantityKind#units()} are accepted, written
+ * exactly so; the requirement schema's quantity patterns are built from the same lists.
  */
 public final class Quantities {
     /** 1 in, m (exact). */
@@ -43,11 +46,11 @@ public final class Quantities {
 
     /** Unit symbols that mark a quantity as written in US customary units. */
     private static final Set<String> CUSTOMARY = Set.of("in", "ft", "lb", "lbf", "psi", "kpsi");
-    private static final Pattern NUMBER_THEN_UNIT =
-            Pattern.compile("([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*)", Pattern.DOTALL);
     private static final Pattern NOT_FINITE = Pattern.compile("[+-]?(?:nan|\\.nan|inf|\\.inf|infinity)\\b.*",
             Pattern.CASE_INSENSITIVE | Pattern.DOTALL);
     private static final SimpleUnitFormat FORMAT = unitFormat();
+    /** Longest unit text handed to the unit parser; every accepted unit is far shorter. */
+    private static final int MAX_UNIT_CHARS = 16;
 
     private Quantities() {
     }
@@ -83,47 +86,55 @@ public final class Quantities {
     static Measured measure(String text, QuantityKind... kinds) {
         String what = Arrays.stream(kinds).map(QuantityKind::description).collect(Collectors.joining(" or "));
         String examples = Arrays.stream(kinds).map(QuantityKind::examples).collect(Collectors.joining(" or "));
-        String t = text == null ? "" : text.strip();
+        String t = text == null ? "" : Grammar.trim(text);
+        String shown = Shown.value(t);
         if (t.isEmpty()) {
             throw BadInputException.of(Message.NO_VALUE, what, examples);
         }
-        Matcher m = NUMBER_THEN_UNIT.matcher(t);
+        Matcher m = Grammar.NUMBER_THEN_UNIT.matcher(t);
         if (!m.matches()) {
             if (NOT_FINITE.matcher(t).matches()) {
-                throw BadInputException.of(Message.NOT_A_FINITE_NUMBER, t);
+                throw BadInputException.of(Message.NOT_A_FINITE_NUMBER, shown, what + " such as " + examples);
             }
-            throw BadInputException.of(Message.NOT_A_NUMBER, t, what, examples);
+            throw BadInputException.of(Message.NOT_A_NUMBER, shown, what, examples);
         }
         double number = Double.parseDouble(m.group(1));
-        String unitText = m.group(2).strip();
+        String unitText = m.group(2);
         if (unitText.isEmpty()) {
-            throw BadInputException.of(Message.NO_UNIT, t, what, examples);
+            throw BadInputException.of(Message.NO_UNIT, shown, what, examples);
         }
         if (!Double.isFinite(number)) {
-            throw BadInputException.of(Message.NOT_A_FINITE_NUMBER, t);
+            throw BadInputException.of(Message.NOT_A_FINITE_NUMBER, shown, what + " such as " + examples);
         }
-        Unit<?> unit = unit(unitText, t, kinds);
+        Unit<?> unit = unit(unitText, shown, kinds);
         for (QuantityKind kind : kinds) {
             if (fits(unit, kind)) {
+                if (!kind.units().contains(unitText)) {
+                    throw BadInputException.of(Message.UNIT_NOT_LISTED, shown, Shown.value(unitText), kind.noun(),
+                            kind.usualUnits());
+                }
                 double si = toSi(unit, kind, number);
                 if (!Double.isFinite(si)) {
-                    throw BadInputException.of(Message.NOT_A_FINITE_NUMBER, t);
+                    throw BadInputException.of(Message.NOT_A_FINITE_NUMBER, shown, what + " such as " + examples);
                 }
                 return new Measured(si, kind, system(unitText, kind));
             }
         }
-        throw BadInputException.of(Message.EXPECTED, what, "'" + t + "'");
+        throw BadInputException.of(Message.EXPECTED, what, "'" + shown + "'");
     }
 
     private static Unit<?> unit(String unitText, String whole, QuantityKind... kinds) {
         try {
+            if (unitText.length() > MAX_UNIT_CHARS) {
+                throw new IllegalArgumentException("longer than any unit coilwise reads");
+            }
             return FORMAT.parse(unitText);
         } catch (RuntimeException e) { // MeasurementParseException, or IllegalArgumentException on odd input
             String nouns = Arrays.stream(kinds).map(QuantityKind::noun).collect(Collectors.joining(" or "));
             String usual = Arrays.stream(kinds).map(QuantityKind::usualUnits).collect(Collectors.joining(", "));
-            List<String> candidates = Arrays.asList(usual.split(",\\s*"));
-            throw BadInputException.of(Message.UNKNOWN_UNIT, whole, unitText, Suggest.hint(unitText, candidates), nouns,
-                    usual);
+            List<String> candidates = Arrays.stream(kinds).flatMap(k -> k.units().stream()).toList();
+            throw BadInputException.of(Message.UNKNOWN_UNIT, whole, Shown.value(unitText),
+                    Suggest.hint(unitText, candidates), nouns, usual);
         }
     }
 
@@ -163,6 +174,7 @@ public final class Quantities {
         f.label(Units.METRE.multiply(FOOT), "ft");
         Unit<Mass> pound = Units.KILOGRAM.multiply(POUND);
         f.label(pound, "lb");
+        f.label(Units.KILOGRAM.multiply(1000), "t");
         f.label(Units.NEWTON.multiply(POUND_FORCE), "lbf");
         f.label(Units.PASCAL.multiply(PSI), "psi");
         f.label(Units.PASCAL.multiply(PSI * 1000), "kpsi");

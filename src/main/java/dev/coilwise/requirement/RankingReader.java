@@ -5,6 +5,7 @@ import dev.coilwise.model.Prefer;
 import dev.coilwise.model.RankBy;
 import dev.coilwise.model.Ranking;
 import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -63,15 +64,27 @@ final class RankingReader {
         top.items("stock", "a list of catalogue files such as [../spring-catalogs/demo-metric.csv]").ifPresent(items -> {
             for (YamlNode n : items) {
                 top.scalarOf(n, "stock", "a file path").ifPresent(s -> {
-                    Path p = baseDir.resolve(s.text().strip()).normalize();
-                    if (Files.isRegularFile(p)) {
-                        paths.add(p);
+                    Optional<Path> p = resolve(baseDir, s.text().strip());
+                    if (p.isEmpty()) {
+                        top.problems().add(n.position(), "stock", Message.NOT_A_PATH.format(Shown.value(s.text())));
+                    } else if (Files.isRegularFile(p.get())) {
+                        paths.add(p.get());
                     } else {
-                        top.problems().add(n.position(), "stock", Message.STOCK_NOT_FOUND.format(p));
+                        top.problems().add(n.position(), "stock",
+                                Message.STOCK_NOT_FOUND.format(Shown.escape(p.get().toString())));
                     }
                 });
             }
         });
         return paths;
+    }
+
+    /** The path resolved against the base folder, or empty when the text cannot name a file on this system. */
+    private static Optional<Path> resolve(Path baseDir, String text) {
+        try {
+            return Optional.of(baseDir.resolve(text).normalize());
+        } catch (InvalidPathException e) {
+            return Optional.empty();
+        }
     }
 }

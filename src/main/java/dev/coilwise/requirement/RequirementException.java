@@ -15,8 +15,8 @@ public final class RequirementException extends BadInputException {
     private final transient List<InputProblem> problems;
 
     public RequirementException(String file, List<InputProblem> problems) {
-        super(Message.PROBLEMS_IN_FILE.format(problems.size(), file,
-                problems.stream().map(p -> "  " + p).collect(Collectors.joining(System.lineSeparator()))));
+        super(Message.PROBLEMS_IN_FILE.format(problems.size(), file) + problems.stream()
+                .map(p -> System.lineSeparator() + "  " + p).collect(Collectors.joining()));
         if (problems.isEmpty()) {
             throw new IllegalArgumentException("a RequirementException needs at least one problem");
         }

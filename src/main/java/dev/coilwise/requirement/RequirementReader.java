@@ -1,6 +1,7 @@
 package dev.coilwise.requirement;
 
 import dev.coilwise.error.InternalFaultException;
+import dev.coilwise.error.Message;
 import dev.coilwise.materials.MaterialTable;
 import dev.coilwise.model.Envelope;
 import dev.coilwise.model.Job;
@@ -15,8 +16,10 @@ import java.util.Optional;
 
 /**
  * Reads a requirement file (YAML, format in {@code docs/requirement-format.md}) into a validated {@link Requirement}
- * in SI. Every problem of the file is collected, with its line and column, and thrown together in one
- * {@link RequirementException}.
+ * in SI. The file is first checked against the requirement schema ({@link RequirementSchema}), then by the reader's
+ * own checks (units, dimensions, ranges, keys that contradict each other). Every problem of the file is collected,
+ * with its line and column, and thrown together in one {@link RequirementException}; a mistake both checks find is
+ * reported once, in the reader's words.
  *
  * <p>The unit system of the requirement is decided by majority: US when more of the file's lengths, forces, masses,
  * speeds, rates and stresses are written in inch-pound units (in, ft, lb, lbf, psi, kpsi) than in metric units; SI
@@ -28,9 +31,16 @@ public final class RequirementReader {
     static final String NEEDED = "job, load, limits and motion (arrest) or launch (launch)";
 
     private final MaterialTable materials;
+    private final boolean schemaCheck;
 
     public RequirementReader(MaterialTable materials) {
+        this(materials, true);
+    }
+
+    /** A reader that may leave out the schema check: for the tests that compare the schema with the reader. */
+    RequirementReader(MaterialTable materials, boolean schemaCheck) {
         this.materials = Objects.requireNonNull(materials, "materials");
+        this.schemaCheck = schemaCheck;
     }
 
     /** Reads and validates a file; stock paths are resolved against the file's folder. */
@@ -38,7 +48,7 @@ public final class RequirementReader {
         Problems problems = new Problems(file.toString());
         Optional<String> text = FileText.read(file, problems);
         problems.throwIfAny();
-        return parse(text.orElseThrow(), problems, FileText.folderOf(file), titleOf(file));
+        return parse(text.orElseThrow(), problems, FileText.folderOf(file), titleOf(file.toString()));
     }
 
     /**
@@ -49,14 +59,20 @@ public final class RequirementReader {
      */
     public Requirement parse(String yamlText, String fileNameForMessages, Path baseDirForStockPaths) {
         Path base = baseDirForStockPaths == null ? Path.of("").toAbsolutePath() : baseDirForStockPaths;
-        return parse(yamlText, new Problems(fileNameForMessages), base, titleOf(Path.of(fileNameForMessages)));
+        return parse(yamlText, new Problems(fileNameForMessages), base, titleOf(fileNameForMessages));
     }
 
     private Requirement parse(String text, Problems problems, Path base, String defaultTitle) {
         Optional<YamlNode.Mapping> root = YamlTreeReader.read(text, problems, NEEDED);
         problems.throwIfAny();
+        if (schemaCheck) {
+            RequirementSchema.check(root.orElseThrow(), problems);
+        }
         Section top = new Section("", root.orElseThrow(), new YamlNode.Position(1, 1), problems, TOP_KEYS);
         String title = top.has("title") ? top.text("title").orElse(defaultTitle) : defaultTitle;
+        if (title.chars().anyMatch(Character::isISOControl)) {
+            top.problem("title", Message.CONTROL_CHARACTER.format(Shown.value(title)));
+        }
         Optional<String> job = top.has("job") ? top.choice("job", List.of(JobReader.ARREST, JobReader.LAUNCH)) : Optional.empty();
         if (!top.has("job")) {
             top.missing("job", "what the spring must do: arrest or launch");
@@ -83,9 +99,9 @@ public final class RequirementReader {
         return part.orElseThrow(() -> new InternalFaultException("requirement reader: no " + name + " and no problem reported"));
     }
 
-    private static String titleOf(Path file) {
-        Path name = file.getFileName();
-        String n = name == null ? "" : name.toString();
+    /** The file name without folders and extension; works on labels such as {@code <stdin>} that are no path. */
+    private static String titleOf(String fileName) {
+        String n = fileName.substring(Math.max(fileName.lastIndexOf('/'), fileName.lastIndexOf('\\')) + 1);
         int dot = n.lastIndexOf('.');
         return dot > 0 ? n.substring(0, dot) : n;
     }

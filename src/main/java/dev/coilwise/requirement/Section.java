@@ -6,10 +6,15 @@ import dev.coilwise.requirement.YamlNode.Mapping;
 import dev.coilwise.requirement.YamlNode.Position;
 import dev.coilwise.requirement.YamlNode.Scalar;
 import dev.coilwise.requirement.YamlNode.Sequence;
+import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Supplier;
+import java.util.regex.Pattern;
+import java.util.stream.Collectors;
 
 /**
  * Typed, position-aware access to one mapping of a file (the top level or a section such as {@code limits}). Every
@@ -20,11 +25,13 @@ final class Section {
     /** Sign rule for a quantity. */
     enum Sign { POSITIVE, NON_NEGATIVE, ANY }
 
+    private static final Pattern NOT_FINITE = Pattern.compile("[+-]?\\.?(?:nan|inf|infinity)", Pattern.CASE_INSENSITIVE);
+
     private final String path;
     private final Mapping map;
     private final Position where;
     private final Problems problems;
-    private final java.util.Map<String, Optional<Section>> children = new java.util.HashMap<>();
+    private final Map<String, Optional<Section>> children = new HashMap<>();
 
     Section(String path, Mapping map, Position where, Problems problems, List<String> allowed) {
         this.path = path;
@@ -33,8 +40,8 @@ final class Section {
         this.problems = problems;
         map.entries().forEach((k, e) -> {
             if (!allowed.contains(k)) {
-                problems.add(e.keyPosition(), key(k),
-                        Message.UNKNOWN_FIELD.format(k, Suggest.hint(k, allowed), String.join(", ", allowed)));
+                problems.add(e.keyPosition(), key(Shown.value(k)),
+                        Message.UNKNOWN_FIELD.format(Shown.value(k), Suggest.hint(k, allowed), String.join(", ", allowed)));
             }
         });
     }
@@ -72,7 +79,7 @@ final class Section {
     /** The text of a scalar value as written, for quoting in messages; empty string when absent. */
     String raw(String name) {
         YamlNode.Entry e = map.entries().get(name);
-        return e != null && e.value() instanceof Scalar s ? s.text() : "";
+        return e != null && e.value() instanceof Scalar s ? Shown.value(s.text()) : "";
     }
 
     void problem(String name, String message) {
@@ -128,8 +135,8 @@ final class Section {
 
     /** A quantity of any of {@code kinds}, with the kind it turned out to be. */
     Optional<Quantities.Measured> measured(String name, Sign sign, QuantityKind... kinds) {
-        String expected = java.util.Arrays.stream(kinds).map(k -> k.description() + " such as " + k.examples())
-                .collect(java.util.stream.Collectors.joining(" or "));
+        String expected = Arrays.stream(kinds).map(k -> k.description() + " such as " + k.examples())
+                .collect(Collectors.joining(" or "));
         return node(name).flatMap(n -> scalarOf(n, key(name), expected)).flatMap(s -> measuredOf(s, key(name), sign, kinds));
     }
 
@@ -142,13 +149,21 @@ final class Section {
         try {
             Quantities.Measured m = Quantities.measure(s.text(), kinds);
             problems.tally(m.system());
-            if (sign == Sign.POSITIVE && m.value() <= 0) {
-                problems.add(s.position(), key, Message.MUST_BE_POSITIVE.format(s.text()));
+            boolean negative = m.value() < 0 || m.value() == 0 && Grammar.trim(s.text()).startsWith("-");
+            if (sign == Sign.POSITIVE && (m.value() <= 0 || negative)) {
+                problems.add(s.position(), key, Message.MUST_BE_POSITIVE.format(Shown.value(s.text())));
                 return Optional.empty();
             }
-            if (sign == Sign.NON_NEGATIVE && m.value() < 0) {
-                problems.add(s.position(), key, Message.MUST_NOT_BE_NEGATIVE.format(s.text()));
+            if (sign == Sign.NON_NEGATIVE && negative) {
+                problems.add(s.position(), key, Message.MUST_NOT_BE_NEGATIVE.format(Shown.value(s.text())));
                 return Optional.empty();
+            }
+            if (m.kind().dimensional()) {
+                Optional<String> outOfBounds = Magnitudes.of(key).flatMap(b -> b.check(m.value(), s.text()));
+                if (outOfBounds.isPresent()) {
+                    problems.add(s.position(), key, outOfBounds.get());
+                    return Optional.empty();
+                }
             }
             return Optional.of(m);
         } catch (BadInputException e) {
@@ -159,7 +174,7 @@ final class Section {
 
     /** A percentage within [min, max] (given as ratios, e.g. 0.95 for 95 %). */
     OptionalDouble fraction(String name, double min, double max) {
-        OptionalDouble f = quantity(name, QuantityKind.FRACTION, Sign.ANY);
+        OptionalDouble f = quantity(name, QuantityKind.FRACTION, Sign.NON_NEGATIVE);
         if (f.isPresent() && (f.getAsDouble() < min || f.getAsDouble() > max)) {
             problem(name, Message.NOT_IN_RANGE.format(plain(min * 100) + " %", plain(max * 100) + " %", raw(name)));
             return OptionalDouble.empty();
@@ -172,12 +187,14 @@ final class Section {
         return scalar(name, "one of " + String.join(", ", allowed)).flatMap(s -> choiceOf(s, key(name), allowed));
     }
 
+    /** One of a fixed set of words, written exactly (as the schema's enums require). */
     Optional<String> choiceOf(Scalar s, String key, List<String> allowed) {
-        String v = s.text().strip();
+        String v = s.text();
         if (allowed.contains(v)) {
             return Optional.of(v);
         }
-        problems.add(s.position(), key, Message.NOT_A_CHOICE.format(v, Suggest.hint(v, allowed), String.join(", ", allowed)));
+        problems.add(s.position(), key, Message.NOT_A_CHOICE.format(Shown.value(v), Suggest.hint(v, allowed),
+                String.join(", ", allowed)));
         return Optional.empty();
     }
 
@@ -194,24 +211,43 @@ final class Section {
 
     /** A plain number (no unit) within [min, max]. */
     OptionalDouble number(String name, double min, double max) {
-        Optional<Scalar> s = scalar(name, "a number");
-        return s.isEmpty() ? OptionalDouble.empty() : numberOf(s.get(), key(name), min, max);
+        return number(name, min, max, false);
+    }
+
+    private OptionalDouble number(String name, double min, double max, boolean whole) {
+        Optional<Scalar> s = scalar(name, numberWords(min, max, whole));
+        return s.isEmpty() ? OptionalDouble.empty() : numberOf(s.get(), key(name), min, max, whole);
     }
 
     OptionalDouble numberOf(Scalar s, String key, double min, double max) {
-        double v;
-        try {
-            v = Double.parseDouble(s.text().strip().replace("_", ""));
-        } catch (NumberFormatException e) {
-            problems.add(s.position(), key, Message.EXPECTED.format("a plain number", s.describe()));
+        return numberOf(s, key, min, max, false);
+    }
+
+    /** "a plain number from 1 to 1e10", "a whole number from 1 to 100". */
+    private static String numberWords(double min, double max, boolean whole) {
+        return (whole ? "a whole number" : "a plain number") + " from " + plain(min) + " to " + plain(max);
+    }
+
+    private OptionalDouble numberOf(Scalar s, String key, double min, double max, boolean whole) {
+        String text = Grammar.trim(s.text());
+        String words = numberWords(min, max, whole);
+        if (!Grammar.NUMBER.matcher(text).matches()) {
+            String what = NOT_FINITE.matcher(text).matches() ? Message.NOT_A_FINITE_NUMBER.format(Shown.value(text), words)
+                    : Message.EXPECTED.format(words, s.describe());
+            problems.add(s.position(), key, what);
             return OptionalDouble.empty();
         }
+        double v = Double.parseDouble(text.replace("_", ""));
         if (!Double.isFinite(v)) {
-            problems.add(s.position(), key, Message.NOT_A_FINITE_NUMBER.format(s.text()));
+            problems.add(s.position(), key, Message.NOT_A_FINITE_NUMBER.format(Shown.value(text), words));
             return OptionalDouble.empty();
         }
         if (v < min || v > max) {
-            problems.add(s.position(), key, Message.NOT_IN_RANGE.format(plain(min), plain(max), s.text()));
+            problems.add(s.position(), key, Message.NOT_IN_RANGE.format(plain(min), plain(max), Shown.value(s.text())));
+            return OptionalDouble.empty();
+        }
+        if (whole && v != Math.rint(v)) {
+            problems.add(s.position(), key, Message.EXPECTED.format(words, s.describe()));
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(v);
@@ -219,15 +255,8 @@ final class Section {
 
     /** A whole number within [min, max]. */
     Optional<Integer> integer(String name, int min, int max) {
-        OptionalDouble v = number(name, min, max);
-        if (v.isEmpty()) {
-            return Optional.empty();
-        }
-        if (v.getAsDouble() != Math.rint(v.getAsDouble())) {
-            problem(name, Message.EXPECTED.format("a whole number", "'" + raw(name) + "'"));
-            return Optional.empty();
-        }
-        return Optional.of((int) v.getAsDouble());
+        OptionalDouble v = number(name, min, max, true);
+        return v.isEmpty() ? Optional.empty() : Optional.of((int) v.getAsDouble());
     }
 
     /** The items of a list; a single scalar counts as a list of one. */
@@ -254,7 +283,19 @@ final class Section {
         }
     }
 
+    /** A number as people write it: 4, 0.5, 1e10 (not 4.0 or 10000000000). */
     static String plain(double v) {
-        return v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
+        if (v == Math.rint(v) && Math.abs(v) < 1e7) {
+            return String.valueOf((long) v);
+        }
+        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
+            String digits = String.valueOf((long) Math.abs(v));
+            String mantissa = digits.replaceAll("0+$", "");
+            if (mantissa.length() == 1) {
+                return (v < 0 ? "-" : "") + mantissa + "e" + (digits.length() - 1);
+            }
+            return String.valueOf((long) v);
+        }
+        return String.valueOf(v);
     }
 }

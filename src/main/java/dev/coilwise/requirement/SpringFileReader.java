@@ -24,6 +24,12 @@ public final class SpringFileReader {
             + " and free_length";
     /** Largest coil count read (the model's bound on active coils). */
     static final double MAX_COILS = 200;
+    /**
+     * Heaviest spring checked, kg: 100 kg. coilwise's own bound, not a published figure: a cold-coiled spring of the
+     * thickest wire in the material table (12.7 mm) at index 12 with 100 active coils weighs about 50 kg; a heavier one is a
+     * slip of a diameter, a coil count or a unit (hot-coiled bar springs are outside the material table).
+     */
+    static final double MAX_SPRING_MASS = 100;
 
     public Spring read(Path file, MaterialTable materials) {
         Problems problems = new Problems(file.toString());
@@ -68,6 +74,10 @@ public final class SpringFileReader {
         problems.throwIfAny();
         Optional<Spring> spring = s.build("", () -> new Spring(material.orElseThrow(), ends.orElseThrow(), d.getAsDouble(),
                 dm.getAsDouble(), na.getAsDouble(), l0.getAsDouble()));
+        if (spring.isPresent() && spring.get().mass() > MAX_SPRING_MASS) {
+            problems.add(s.where(), "", Message.SPRING_TOO_HEAVY.format(Section.plain(Math.round(spring.get().mass())),
+                    Section.plain(MAX_SPRING_MASS)));
+        }
         problems.throwIfAny();
         return spring.orElseThrow();
     }
@@ -83,7 +93,7 @@ public final class SpringFileReader {
         if (table.contains(key)) {
             return Optional.of(table.get(key));
         }
-        s.problem("material", Message.MATERIAL_NOT_IN_TABLE.format(key, Suggest.hint(key, table.keys()),
+        s.problem("material", Message.MATERIAL_NOT_IN_TABLE.format(Shown.value(key), Suggest.hint(key, table.keys()),
                 String.join(", ", table.keys())));
         return Optional.empty();
     }

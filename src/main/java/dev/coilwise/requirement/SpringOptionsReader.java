@@ -26,6 +26,9 @@ final class SpringOptionsReader {
     /** Bounds on the clash allowance (fraction), cycles, fatigue margin: those of {@link SpringOptions}. */
     static final double CLASH_MAX = 2, CYCLES_MIN = 1, CYCLES_MAX = 1e10, MARGIN_MIN = 0.5, MARGIN_MAX = 5;
 
+    private static final List<String> END_TYPES = Arrays.stream(EndType.values()).map(EndType::key).toList();
+    private static final List<String> SEATINGS = Arrays.stream(Seating.values()).map(Seating::key).toList();
+
     private SpringOptionsReader() {
     }
 
@@ -42,13 +45,14 @@ final class SpringOptionsReader {
         int before = s.problems().list().size();
         List<String> materials = s.has("materials") ? materials(s, table) : d.materials();
         List<EndType> ends = s.has("ends") ? ends(s) : d.ends();
-        double[] index = s.has("index") ? pair(s, "index", INDEX_LOW, INDEX_HIGH) : new double[] {d.indexMin(), d.indexMax()};
-        double[] coils = s.has("active_coils") ? pair(s, "active_coils", COILS_LOW, COILS_HIGH)
-                : new double[] {d.coilsMin(), d.coilsMax()};
+        double[] usualIndex = {d.indexMin(), d.indexMax()};
+        double[] usualCoils = {d.coilsMin(), d.coilsMax()};
+        double[] index = s.has("index") ? pair(s, "index", INDEX_LOW, INDEX_HIGH, usualIndex) : usualIndex;
+        double[] coils = s.has("active_coils") ? pair(s, "active_coils", COILS_LOW, COILS_HIGH, usualCoils) : usualCoils;
         double clash = s.has("clash_allowance") ? s.fraction("clash_allowance", 0, CLASH_MAX).orElse(Double.NaN) : d.clashAllowance();
         boolean solidSafe = s.has("solid_safe") ? s.flag("solid_safe").orElse(true) : d.solidSafe();
         boolean setRemoved = s.has("set_removed") ? s.flag("set_removed").orElse(false) : d.setRemoved();
-        Seating seating = s.has("seating") ? s.choice("seating", keys(Seating.values())).map(Seating::fromKey).orElse(null)
+        Seating seating = s.has("seating") ? s.choice("seating", SEATINGS).map(Seating::fromKey).orElse(null)
                 : d.seating();
         Optional<WireSeries> series = s.has("wire_series")
                 ? s.choice("wire_series", List.of("metric", "inch")).map(w -> WireSeries.valueOf(w.toUpperCase(Locale.ROOT)))
@@ -69,13 +73,13 @@ final class SpringOptionsReader {
         List<String> keys = new ArrayList<>();
         s.items("materials", "a list of material keys such as [music-wire, chrome-silicon]").ifPresent(items -> {
             for (YamlNode n : items) {
-                s.scalarOf(n, s.key("materials"), "a material key").map(m -> m.text().strip()).ifPresent(k -> {
+                s.scalarOf(n, s.key("materials"), "a material key").map(YamlNode.Scalar::text).ifPresent(k -> {
                     if (table.contains(k)) {
                         if (!keys.contains(k)) {
                             keys.add(k);
                         }
                     } else {
-                        s.problems().add(n.position(), s.key("materials"), Message.MATERIAL_NOT_IN_TABLE.format(k,
+                        s.problems().add(n.position(), s.key("materials"), Message.MATERIAL_NOT_IN_TABLE.format(Shown.value(k),
                                 Suggest.hint(k, table.keys()), String.join(", ", table.keys())));
                     }
                 });
@@ -88,7 +92,7 @@ final class SpringOptionsReader {
     }
 
     private static List<EndType> ends(Section s) {
-        List<String> allowed = keys(EndType.values());
+        List<String> allowed = END_TYPES;
         List<EndType> ends = new ArrayList<>();
         s.items("ends", "a list of end types such as [closed-ground, closed]").ifPresent(items -> {
             for (YamlNode n : items) {
@@ -103,10 +107,10 @@ final class SpringOptionsReader {
     }
 
     /** A {@code [low, high]} pair of plain numbers within [min, max]; NaNs when it is wrong (reported). */
-    private static double[] pair(Section s, String name, double min, double max) {
+    private static double[] pair(Section s, String name, double min, double max, double[] usual) {
         double[] nan = {Double.NaN, Double.NaN};
         YamlNode n = s.node(name).orElseThrow();
-        String example = "[" + Section.plain(min * 2) + ", " + Section.plain(Math.min(max, min * 6)) + "]";
+        String example = "[" + Section.plain(usual[0]) + ", " + Section.plain(usual[1]) + "]";
         if (!(n instanceof YamlNode.Sequence seq) || seq.items().size() != 2) {
             s.problem(name, Message.EXPECTED.format("a list of two numbers [low, high] such as " + example, describe(n)));
             return nan;
@@ -129,7 +133,4 @@ final class SpringOptionsReader {
         return n instanceof YamlNode.Sequence seq ? "a list of " + seq.items().size() : n.describe();
     }
 
-    private static List<String> keys(Enum<?>[] values) {
-        return Arrays.stream(values).map(v -> v instanceof EndType e ? e.key() : ((Seating) v).key()).toList();
-    }
 }

@@ -1,5 +1,7 @@
 package dev.coilwise.requirement;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -19,17 +21,21 @@ sealed interface YamlNode permits YamlNode.Scalar, YamlNode.Mapping, YamlNode.Se
     /** A short description for "expected ..., got ..." messages. */
     String describe();
 
+    /** What the YAML parser took a scalar for: quoted text is always {@code STRING}. */
+    enum Type { STRING, NUMBER, BOOLEAN, NULL }
+
     /**
      * A scalar value.
      *
      * @param text     the text as written (without quotes); empty for a key with no value
      * @param bool     for a plain {@code true}/{@code false} (YAML 1.1 also reads yes/no, on/off), its value; else null
+     * @param type     what the parser took it for (for the schema check, which sees types as an editor does)
      * @param position where the value starts
      */
-    record Scalar(String text, Boolean bool, Position position) implements YamlNode {
+    record Scalar(String text, Boolean bool, Type type, Position position) implements YamlNode {
         @Override
         public String describe() {
-            return text.isEmpty() ? "no value" : "'" + text + "'";
+            return text.isEmpty() ? "no value" : "'" + Shown.value(text) + "'";
         }
     }
 
@@ -40,7 +46,7 @@ sealed interface YamlNode permits YamlNode.Scalar, YamlNode.Mapping, YamlNode.Se
     /** A mapping in file order. */
     record Mapping(Map<String, Entry> entries, Position position) implements YamlNode {
         public Mapping {
-            entries = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(entries));
+            entries = Collections.unmodifiableMap(new LinkedHashMap<>(entries));
         }
 
         @Override

@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.yaml.snakeyaml.LoaderOptions;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
 
 /**
  * Reads YAML text safely into a {@link YamlNode} tree with positions.
@@ -36,6 +37,9 @@ final class YamlTreeReader {
 
     private final Problems problems;
     private boolean refused;
+    private int aliases;
+    private YamlNode.Position firstAlias;
+    private String firstAliasName;
 
     private YamlTreeReader(Problems problems) {
         this.problems = problems;
@@ -47,7 +51,7 @@ final class YamlTreeReader {
         options.setAllowRecursiveKeys(false);
         options.setNestingDepthLimit(MAX_DEPTH);
         options.setCodePointLimit(MAX_BYTES);
-        options.setAllowDuplicateKeys(false);
+        options.setAllowDuplicateKeys(true); // reported by this reader, with both lines, instead of a bare parse error
         return YAMLFactory.builder().loaderOptions(options).build();
     }
 
@@ -58,10 +62,10 @@ final class YamlTreeReader {
     static Optional<YamlNode.Mapping> read(String text, Problems problems, String needed) {
         int bytes = text.getBytes(StandardCharsets.UTF_8).length;
         if (bytes > MAX_BYTES) {
-            problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format(bytes, MAX_BYTES));
+            problems.add(YamlNode.Position.FILE, "", Message.FILE_TOO_LARGE.format("has " + bytes, MAX_BYTES, MAX_BYTES >> 20));
             return Optional.empty();
         }
-        return new YamlTreeReader(problems).readTree(text, needed);
+        return new YamlTreeReader(problems).readTree(FileText.stripBom(text), needed);
     }
 
     private Optional<YamlNode.Mapping> readTree(String text, String needed) {
@@ -72,7 +76,8 @@ final class YamlTreeReader {
                 problems.add(new YamlNode.Position(1, 1), "", Message.YAML_EMPTY.format(needed));
                 return Optional.empty();
             }
-            YamlNode root = node(p, 0);
+            YamlNode root = node(p, 0, "");
+            reportAliases();
             if (p.nextToken() != null) {
                 problems.add(position(p.currentTokenLocation()), "", Message.YAML_MORE_DOCUMENTS.format());
                 return Optional.empty();
@@ -83,17 +88,41 @@ final class YamlTreeReader {
             }
             return refused ? Optional.empty() : Optional.of(map);
         } catch (JsonProcessingException e) {
-            JsonLocation at = e.getLocation();
-            problems.add(at == null ? YamlNode.Position.FILE : position(at), "", Message.YAML_SYNTAX.format(brief(e.getOriginalMessage())));
+            reportAliases();
+            syntax(e);
         } catch (TooDeep e) {
             problems.add(e.at, "", Message.YAML_TOO_DEEP.format(MAX_DEPTH));
+        } catch (TooManyAliases e) {
+            reportAliases();
         } catch (IOException | RuntimeException e) {
             problems.add(YamlNode.Position.FILE, "", Message.YAML_SYNTAX.format(brief(String.valueOf(e.getMessage()))));
         }
         return Optional.empty();
     }
 
-    private YamlNode node(YAMLParser p, int depth) throws IOException {
+    /** A syntax error, placed at SnakeYAML's problem mark when there is one (it points at the offending token). */
+    private void syntax(JsonProcessingException e) {
+        if (e.getCause() instanceof MarkedYAMLException m && m.getProblemMark() != null) {
+            String what = (m.getContext() == null ? "" : m.getContext() + ": ") + m.getProblem();
+            problems.add(new YamlNode.Position(m.getProblemMark().getLine() + 1, m.getProblemMark().getColumn() + 1), "",
+                    Message.YAML_SYNTAX.format(brief(what)));
+            return;
+        }
+        JsonLocation at = e.getLocation();
+        problems.add(at == null ? YamlNode.Position.FILE : position(at), "", Message.YAML_SYNTAX.format(brief(e.getOriginalMessage())));
+    }
+
+    /** One problem for all aliases, at the first: a file with one has usually many, and listing each adds nothing. */
+    private void reportAliases() {
+        if (aliases == 1) {
+            problems.add(firstAlias, "", Message.YAML_ALIAS.format(firstAliasName));
+        } else if (aliases > 1) {
+            problems.add(firstAlias, "", Message.YAML_ALIAS.format(firstAliasName + " and " + (aliases - 1) + " more"));
+        }
+        aliases = 0;
+    }
+
+    private YamlNode node(YAMLParser p, int depth, String path) throws IOException {
         YamlNode.Position at = position(p.currentTokenLocation());
         if (depth > MAX_DEPTH) {
             throw new TooDeep(at);
@@ -106,10 +135,11 @@ final class YamlTreeReader {
                 String key = p.currentName();
                 YamlNode.Position keyAt = position(p.currentTokenLocation());
                 p.nextToken();
-                YamlNode value = node(p, depth + 1);
+                String keyPath = path.isEmpty() ? key : path + "." + key;
+                YamlNode value = node(p, depth + 1, keyPath);
                 YamlNode.Entry earlier = entries.get(key);
                 if (earlier != null) {
-                    problems.add(keyAt, key, Message.DUPLICATE_KEY.format(earlier.keyPosition().line()));
+                    problems.add(keyAt, keyPath, Message.DUPLICATE_KEY.format(earlier.keyPosition().line()));
                 } else {
                     entries.put(key, new YamlNode.Entry(keyAt, value));
                 }
@@ -119,24 +149,33 @@ final class YamlTreeReader {
         if (t == JsonToken.START_ARRAY) {
             List<YamlNode> items = new ArrayList<>();
             while (p.nextToken() != JsonToken.END_ARRAY) {
-                items.add(node(p, depth + 1));
+                items.add(node(p, depth + 1, path));
             }
             return new YamlNode.Sequence(items, at);
         }
         Boolean bool = t == JsonToken.VALUE_TRUE ? Boolean.TRUE : t == JsonToken.VALUE_FALSE ? Boolean.FALSE : null;
         String text = t == JsonToken.VALUE_NULL ? "" : p.getText();
-        return new YamlNode.Scalar(text == null ? "" : text, bool, at);
+        YamlNode.Type type = bool != null ? YamlNode.Type.BOOLEAN : t == JsonToken.VALUE_NULL ? YamlNode.Type.NULL
+                : t == JsonToken.VALUE_NUMBER_INT || t == JsonToken.VALUE_NUMBER_FLOAT ? YamlNode.Type.NUMBER
+                : YamlNode.Type.STRING;
+        return new YamlNode.Scalar(text == null ? "" : text, bool, type, at);
     }
 
     private void checkTagAndAlias(YAMLParser p, YamlNode.Position at) throws IOException {
         if (p.isCurrentAlias()) {
-            problems.add(at, "", Message.YAML_ALIAS.format(p.getText()));
+            if (aliases++ == 0) {
+                firstAlias = at;
+                firstAliasName = Shown.value(p.getText());
+            }
             refused = true;
+            if (aliases > MAX_ALIASES_FOR_COLLECTIONS) {
+                throw new TooManyAliases(); // stop reading a file built to expand
+            }
         }
         String tag = p.getTypeId();
         if (tag != null) {
             String shown = tag.startsWith(YAML_TAG_PREFIX) ? "!!" + tag.substring(YAML_TAG_PREFIX.length()) : tag;
-            problems.add(at, "", Message.YAML_TAG.format(shown));
+            problems.add(at, "", Message.YAML_TAG.format(Shown.value(shown)));
             refused = true;
         }
     }
@@ -150,6 +189,15 @@ final class YamlTreeReader {
         String m = message == null ? "" : message.strip();
         int nl = m.indexOf('\n');
         return nl < 0 ? m : m.substring(0, nl).strip();
+    }
+
+    /** Unwinds the recursion when a file holds more aliases than the limit. */
+    private static final class TooManyAliases extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        TooManyAliases() {
+            super(null, null, false, false);
+        }
     }
 
     /** Unwinds the recursion when the nesting limit is passed. */

@@ -68,7 +68,7 @@ public final class Diagnoser {
                 nearest.add(n);
             }
         }
-        return new Diagnosis(sampled, sorted, nearest);
+        return new Diagnosis(sampled, sorted, nearest, LimitConflict.of(req));
     }
 
     private static List<Long> spread(long lo, long hi) {

@@ -1,41 +1,179 @@
 package dev.coilwise.search;
 
+import dev.coilwise.catalog.StockEvaluation;
+import dev.coilwise.catalog.StockEvaluator;
+import dev.coilwise.catalog.StockPart;
+import dev.coilwise.dynamics.SimulationOptions;
+import dev.coilwise.dynamics.SimulationResult;
+import dev.coilwise.dynamics.SimulationSummary;
+import dev.coilwise.dynamics.Simulator;
 import dev.coilwise.materials.MaterialTable;
 import dev.coilwise.mechanics.Margin;
+import dev.coilwise.model.Prefer;
+import dev.coilwise.model.RankBy;
 import dev.coilwise.model.Requirement;
+import dev.coilwise.scatter.MonteCarlo;
+import dev.coilwise.scatter.ScatterSettings;
+import dev.coilwise.scatter.ScatterSummary;
+import dev.coilwise.scatter.ToleranceSource;
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
-/** Sizes a requirement: search, shortlist, and a diagnosis when nothing is feasible. */
+/**
+ * Sizes a requirement: search, stock parts, shortlist, manufacturing scatter, time-domain simulation, and a
+ * diagnosis when nothing is feasible. Pure: stock catalogues are read by the caller and passed in.
+ *
+ * <p>Order of work: the search gives the best custom design of every family; feasible stock parts (within the
+ * requirement's materials and end types) join them, ordered by {@code ranking.prefer}. The leading designs — the
+ * shortlist length, or {@value SizingOptions#POOL} times it when a later step may drop designs — then go through the
+ * Monte Carlo ({@code ranking.min_probability} drops designs below it; {@code ranking.by: robustness} re-orders by the
+ * probability that every limit holds, ties keeping the search order) and the simulation ({@code ranking.dynamics:
+ * strict} drops flagged designs; otherwise flags are warnings). The first shortlist-length designs left are kept.
+ */
 public final class Sizer {
     private final MaterialTable materials;
     private final SpringSearch search;
+    private final SizingOptions options;
 
     public Sizer(MaterialTable materials) {
-        this(materials, new PrunedSearch());
+        this(materials, new PrunedSearch(), SizingOptions.defaults());
     }
 
-    public Sizer(MaterialTable materials, SpringSearch search) {
+    public Sizer(MaterialTable materials, SpringSearch search, SizingOptions options) {
         this.materials = materials;
         this.search = search;
+        this.options = options;
     }
 
     public SizingResult size(Requirement req) {
+        return size(req, List.of());
+    }
+
+    /** Sizes {@code req}, offering the given stock parts beside custom designs. */
+    public SizingResult size(Requirement req, List<StockPart> stock) {
         DesignSpace space = DesignSpace.of(req, materials);
         SearchResult result = search.run(space);
-        List<ShortlistEntry> list = new ArrayList<>();
-        List<Candidate> top = result.top(req.ranking().shortlist());
-        for (int i = 0; i < top.size(); i++) {
-            list.add(new ShortlistEntry(i + 1, top.get(i)));
-        }
+        int n = req.ranking().shortlist();
+        List<Candidate> ordered = merge(result, stockCandidates(stock, req, space.families().size()), req);
+        boolean robust = req.ranking().by() == RankBy.ROBUSTNESS || req.ranking().minProbability().isPresent();
+        boolean strict = req.ranking().dynamicsStrict();
+        List<Candidate> pool = ordered.subList(0, Math.min(ordered.size(), robust || strict ? SizingOptions.POOL * n : n));
         List<String> warnings = new ArrayList<>();
-        for (ShortlistEntry e : list) {
+        Map<String, Long> removed = new LinkedHashMap<>();
+
+        Optional<ScatterSettings> ss = options.scatter().or(() -> robust ? Optional.of(ScatterSettings.defaults())
+                : Optional.empty());
+        List<ScatterSummary> scatter = ss.isPresent() && !pool.isEmpty()
+                ? MonteCarlo.summarise(pool.stream().map(c -> c.evaluation().spring()).toList(), req,
+                        ToleranceSource.en15800(), ss.get(), options.progress())
+                : List.of();
+        List<ShortlistEntry> entries = new ArrayList<>();
+        for (int i = 0; i < pool.size(); i++) {
+            entries.add(new ShortlistEntry(i + 1, pool.get(i),
+                    scatter.isEmpty() ? Optional.empty() : Optional.of(scatter.get(i))));
+        }
+        if (req.ranking().minProbability().isPresent()) {
+            double pMin = req.ranking().minProbability().getAsDouble();
+            int before = entries.size();
+            entries.removeIf(e -> e.scatter().orElseThrow().probabilityOk() < pMin);
+            if (entries.size() < before) {
+                removed.put("min_probability", (long) (before - entries.size()));
+                warnings.add((before - entries.size()) + " of the " + before + " leading designs left the shortlist:"
+                        + " fewer than " + Math.round(pMin * 1000) / 10.0 + " % of springs made to EN 15800 grade "
+                        + req.spring().toleranceGrade() + " would meet every limit (ranking.min_probability)");
+            }
+        }
+        if (req.ranking().by() == RankBy.ROBUSTNESS) {
+            entries.sort(Comparator.comparingDouble(e -> -e.scatter().orElseThrow().probabilityOk()));
+        }
+        Optional<SimulationOptions> sim = options.simulation().or(() -> strict ? Optional.of(SimulationOptions.defaults())
+                : Optional.empty());
+        List<ShortlistEntry> list = sim.isPresent() ? simulate(entries, req, sim.get(), n, strict, removed, warnings)
+                : entries.subList(0, Math.min(n, entries.size()));
+        List<ShortlistEntry> ranked = new ArrayList<>();
+        for (int i = 0; i < list.size(); i++) {
+            ranked.add(list.get(i).withRank(i + 1));
+        }
+        for (ShortlistEntry e : ranked) {
             e.evaluation().margins().stream().filter(m -> !m.hard() && !m.holds()).forEach(m -> warnings.add(
                     "design " + e.rank() + ": " + softWarning(m)));
+            e.simulation().ifPresent(s -> s.flags().forEach(f -> warnings.add("design " + e.rank() + " (simulation): " + f)));
         }
-        Optional<Diagnosis> diagnosis = list.isEmpty() ? Optional.of(Diagnoser.diagnose(space)) : Optional.empty();
-        return new SizingResult(req, result, list, diagnosis, warnings);
+        Optional<Diagnosis> diagnosis = Optional.empty();
+        if (ranked.isEmpty()) {
+            diagnosis = Optional.of(removed.isEmpty() ? Diagnoser.diagnose(space)
+                    : new Diagnosis(pool.size(), removed, List.of()));
+        }
+        return new SizingResult(req, result, ranked, diagnosis, warnings);
+    }
+
+    /** Simulates designs in order; under strict dynamics drops flagged ones until {@code n} are kept. */
+    private static List<ShortlistEntry> simulate(List<ShortlistEntry> entries, Requirement req, SimulationOptions opt,
+                                                 int n, boolean strict, Map<String, Long> removed,
+                                                 List<String> warnings) {
+        List<ShortlistEntry> kept = new ArrayList<>();
+        int next = 0;
+        long dropped = 0;
+        while (kept.size() < n && next < entries.size()) {
+            List<ShortlistEntry> batch = entries.subList(next, Math.min(entries.size(), next + n - kept.size()));
+            next += batch.size();
+            List<SimulationResult> sims = batch.parallelStream()
+                    .map(e -> Simulator.simulate(e.evaluation().spring(), req, e.evaluation(), opt)).toList();
+            for (int i = 0; i < batch.size(); i++) {
+                SimulationSummary summary = sims.get(i).summary();
+                if (strict && summary.flagged()) {
+                    dropped++;
+                    Candidate c = batch.get(i).candidate();
+                    warnings.add("left the shortlist under ranking.dynamics: strict: " + describe(c) + ": "
+                            + String.join("; ", summary.flags()));
+                } else {
+                    kept.add(batch.get(i).withSimulation(sims.get(i)));
+                }
+            }
+        }
+        if (dropped > 0) {
+            removed.put("dynamics", dropped);
+        }
+        return kept;
+    }
+
+    private static String describe(Candidate c) {
+        var s = c.evaluation().spring();
+        return c.stock().map(p -> "stock part " + p.partNumber()).orElse(s.material().key() + " " + s.ends().key()
+                + String.format(java.util.Locale.ROOT, " d %.2f mm D %.1f mm Na %.2f", s.wireDiameter() * 1e3,
+                        s.meanDiameter() * 1e3, s.activeCoils()));
+    }
+
+    private static List<Candidate> stockCandidates(List<StockPart> stock, Requirement req, int firstOrder) {
+        List<Candidate> out = new ArrayList<>();
+        int order = firstOrder;
+        for (StockEvaluation se : StockEvaluator.evaluate(stock, req)) {
+            int o = order++;
+            if (se.feasible() && se.inDesignSpace()) {
+                var s = se.part().spring();
+                out.add(new Candidate(new Family(o, s.material(), s.ends(), s.wireDiameter()), se.evaluation(),
+                        Optional.of(se.part())));
+            }
+        }
+        return out;
+    }
+
+    private static List<Candidate> merge(SearchResult result, List<Candidate> stock, Requirement req) {
+        Comparator<Candidate> byRank = Objective.comparator(req.ranking().by());
+        Prefer prefer = req.ranking().prefer();
+        Comparator<Candidate> order = switch (prefer) {
+            case STOCK -> Comparator.comparing((Candidate c) -> !c.isStock()).thenComparing(byRank);
+            case CUSTOM -> Comparator.comparing(Candidate::isStock).thenComparing(byRank);
+            case NONE -> byRank;
+        };
+        List<Candidate> all = new ArrayList<>(result.best());
+        all.addAll(stock);
+        all.sort(order);
+        return all;
     }
 
     private static String softWarning(Margin m) {

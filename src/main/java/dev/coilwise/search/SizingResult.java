@@ -20,6 +20,13 @@ public record SizingResult(Requirement requirement, SearchResult search, List<Sh
         warnings = List.copyOf(warnings);
     }
 
+    /** A copy with {@code first} placed before the existing warnings. */
+    public SizingResult withLeadingWarnings(List<String> first) {
+        List<String> all = new java.util.ArrayList<>(first);
+        all.addAll(warnings);
+        return new SizingResult(requirement, search, shortlist, diagnosis, all);
+    }
+
     public boolean feasible() {
         return !shortlist.isEmpty();
     }

@@ -83,6 +83,14 @@ public final class En15800 {
         return coilDiameterTolerance(s, checkGrade(grade), new ArrayList<>());
     }
 
+    /**
+     * Coil-diameter tolerance ± half-width, m, for mean diameter {@code meanDiameter} (m) and index w = D/d: the table
+     * look-up alone, which depends on no material.
+     */
+    public static double coilDiameterTolerance(double meanDiameter, double index, int grade) {
+        return CoilDiameterTable.halfWidth(meanDiameter * 1e3, index, checkGrade(grade)).halfWidthMm() * 1e-3;
+    }
+
     private static double coilDiameterTolerance(Spring s, int grade, List<String> notes) {
         CoilDiameterTable.Entry e = CoilDiameterTable.halfWidth(s.meanDiameter() * 1e3, s.index(), grade);
         if (e.extrapolated()) {

@@ -29,36 +29,32 @@ class FatigueTest {
         return Stress.corrected(lbf * LBF, D_MEAN, D_WIRE);
     }
 
+    private static final double TAU_A = (tau(35) - tau(5)) / 2;
+    private static final double TAU_M = (tau(35) + tau(5)) / 2;
+    private static final double SSU = FatigueCriterion.ULTIMATE_SHEAR_RATIO * SUT;
+
+    private static void assertExample10_4(FatigueCriterion c, double sse, double ssa, double nf) {
+        double endurance = c.enduranceStrength(FatigueStrength.ZIMMERLI_UNPEENED, SSU);
+        double amplitude = c.amplitudeStrength(endurance, SSU, LoadLine.PROPORTIONAL, TAU_A, TAU_M);
+        assertThat(endurance / KPSI).as("Sse").isCloseTo(sse, within(0.05));
+        assertThat(amplitude / KPSI).as("Ssa").isCloseTo(ssa, within(0.05));
+        assertThat(amplitude / TAU_A).as("nf").isCloseTo(nf, within(0.005));
+    }
+
     @Test
     void shigley9thExample10_4WorkingStresses() {
-        double tauA = (tau(35) - tau(5)) / 2;
-        double tauM = (tau(35) + tau(5)) / 2;
-        assertThat(tauA / KPSI).isCloseTo(29.7, within(0.05));
-        assertThat(tauM / KPSI).isCloseTo(39.6, within(0.05));
+        assertThat(TAU_A / KPSI).isCloseTo(29.7, within(0.05));
+        assertThat(TAU_M / KPSI).isCloseTo(39.6, within(0.05));
     }
 
     @Test
     void shigley9thExample10_4GerberWithZimmerliData() {
-        double tauA = (tau(35) - tau(5)) / 2;
-        double tauM = (tau(35) + tau(5)) / 2;
-        double ssu = FatigueCriterion.ULTIMATE_SHEAR_RATIO * SUT;
-        double sse = FatigueCriterion.GERBER.enduranceStrength(FatigueStrength.ZIMMERLI_UNPEENED, ssu);
-        double ssa = FatigueCriterion.GERBER.amplitudeStrength(sse, ssu, LoadLine.PROPORTIONAL, tauA, tauM);
-        assertThat(sse / KPSI).isCloseTo(38.2, within(0.05));
-        assertThat(ssa / KPSI).isCloseTo(35.8, within(0.05));
-        assertThat(ssa / tauA).isCloseTo(1.21, within(0.005));
+        assertExample10_4(FatigueCriterion.GERBER, 38.2, 35.8, 1.21);
     }
 
     @Test
     void shigley9thExample10_4GoodmanWithZimmerliData() {
-        double tauA = (tau(35) - tau(5)) / 2;
-        double tauM = (tau(35) + tau(5)) / 2;
-        double ssu = FatigueCriterion.ULTIMATE_SHEAR_RATIO * SUT;
-        double sse = FatigueCriterion.GOODMAN.enduranceStrength(FatigueStrength.ZIMMERLI_UNPEENED, ssu);
-        double ssa = FatigueCriterion.GOODMAN.amplitudeStrength(sse, ssu, LoadLine.PROPORTIONAL, tauA, tauM);
-        assertThat(sse / KPSI).isCloseTo(49.2, within(0.05));
-        assertThat(ssa / KPSI).isCloseTo(36.6, within(0.05));
-        assertThat(ssa / tauA).isCloseTo(1.23, within(0.005));
+        assertExample10_4(FatigueCriterion.GOODMAN, 49.2, 36.6, 1.23);
     }
 
     @Test

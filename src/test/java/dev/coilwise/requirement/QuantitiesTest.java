@@ -91,21 +91,50 @@ class QuantitiesTest {
     @Test
     void unknownUnitSuggestsTheNearest() {
         assertThatThrownBy(() -> si("45 mmm", QuantityKind.LENGTH))
-                .hasMessage("test: '45 mmm' has an unknown unit 'mmm' (did you mean 'mm'?); length units: mm, cm, m, in, ft");
+                .hasMessage("test: '45 mmm' has an unknown unit 'mmm' (did you mean 'mm'?); length units: mm, cm, m, km, in, ft");
         assertThatThrownBy(() -> si("3 furlong", QuantityKind.LENGTH))
-                .hasMessage("test: '3 furlong' has an unknown unit 'furlong'; length units: mm, cm, m, in, ft");
+                .hasMessage("test: '3 furlong' has an unknown unit 'furlong'; length units: mm, cm, m, km, in, ft");
     }
 
     @Test
     void nanInfinityAndJunkAreRefused() {
-        assertThatThrownBy(() -> si("NaN mm", QuantityKind.LENGTH)).hasMessage("test: 'NaN mm' is not a finite number");
-        assertThatThrownBy(() -> si(".inf mm", QuantityKind.LENGTH)).hasMessage("test: '.inf mm' is not a finite number");
-        assertThatThrownBy(() -> si("-Infinity N", QuantityKind.FORCE)).hasMessage("test: '-Infinity N' is not a finite number");
-        assertThatThrownBy(() -> si("1e999 mm", QuantityKind.LENGTH)).hasMessage("test: '1e999 mm' is not a finite number");
+        assertThatThrownBy(() -> si("NaN mm", QuantityKind.LENGTH)).hasMessage("test: 'NaN mm' is not a finite number; give a length such as '45 mm' or '1.8 in'");
+        assertThatThrownBy(() -> si(".inf mm", QuantityKind.LENGTH)).hasMessage("test: '.inf mm' is not a finite number; give a length such as '45 mm' or '1.8 in'");
+        assertThatThrownBy(() -> si("-Infinity N", QuantityKind.FORCE)).hasMessage("test: '-Infinity N' is not a finite number; give a force such as '12 kN' or '250 lbf'");
+        assertThatThrownBy(() -> si("1e999 mm", QuantityKind.LENGTH)).hasMessage("test: '1e999 mm' is not a finite number; give a length such as '45 mm' or '1.8 in'");
         assertThatThrownBy(() -> si("about 5 mm", QuantityKind.LENGTH))
                 .hasMessage("test: 'about 5 mm' does not start with a number; give a length such as '45 mm' or '1.8 in'");
         assertThatThrownBy(() -> si("", QuantityKind.LENGTH))
                 .hasMessage("test: has no value; give a length such as '45 mm' or '1.8 in'");
+    }
+
+    @Test
+    void unitsIndriyaKnowsButCoilwiseDoesNotListAreRefusedWithTheList() {
+        assertThatThrownBy(() -> si("45 dm", QuantityKind.LENGTH))
+                .hasMessage("test: '45 dm' has a unit coilwise does not read, 'dm'; length units: mm, cm, m, km, in, ft");
+        assertThatThrownBy(() -> si("2 kg*m/s^2", QuantityKind.FORCE))
+                .hasMessage("test: '2 kg*m/s^2' has a unit coilwise does not read, 'kg*m/s^2'; force units: N, daN, kN, MN, lbf");
+        assertThatThrownBy(() -> si("45 MM", QuantityKind.LENGTH))
+                .hasMessage("test: '45 MM' has an unknown unit 'MM' (did you mean 'mm'?); length units: mm, cm, m, km, in, ft");
+    }
+
+    // The tonne: 1 t = 1000 kg (SI Brochure, 9th ed., 2019, Table 8, non-SI units accepted for use with the SI).
+    @Test
+    void everyListedUnitIsReadAndTheTonneIsAThousandKilograms() {
+        for (QuantityKind kind : QuantityKind.values()) {
+            for (String unit : kind.units()) {
+                assertThat(Quantities.measure("2 " + unit, kind).value()).as("2 %s", unit).isPositive().isFinite();
+            }
+        }
+        assertThat(si("1.5 t", QuantityKind.MASS)).isCloseTo(1500, within(1e-12));
+    }
+
+    @Test
+    void longAndControlCharacterValuesAreQuotedCutAndEscaped() {
+        String junk = "7 " + "x".repeat(5000);
+        assertThatThrownBy(() -> si(junk, QuantityKind.LENGTH)).message()
+                .hasSizeLessThan(300).contains("'7 " + "x".repeat(55) + "...'");
+        assertThatThrownBy(() -> si("7 \u001b[31mm", QuantityKind.LENGTH)).message().contains("\\u001b").doesNotContain("\u001b");
     }
 
     @Test

@@ -1,0 +1,100 @@
+package dev.coilwise.dynamics;
+
+import dev.coilwise.error.InternalFaultException;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.apache.commons.math3.ode.events.EventHandler;
+import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
+import org.apache.commons.math3.ode.sampling.StepHandler;
+
+/**
+ * One integration of the chain and load with the Dormand–Prince 8(5,3) integrator of Commons Math, every
+ * discontinuity located by an event handler. Tolerances: relative {@value #RELATIVE_TOLERANCE}; absolute the same
+ * fraction of a length scale for positions and of a speed scale for speeds.
+ */
+final class ChainRun {
+    /** Relative tolerance of the integrator. */
+    static final double RELATIVE_TOLERANCE = 1e-9;
+    /** Absolute tolerance as a fraction of the run's length and speed scales. */
+    static final double ABSOLUTE_TOLERANCE = 1e-9;
+    /** Event times are located to this fraction of the time scale. */
+    static final double EVENT_CONVERGENCE = 1e-12;
+    /** Iterations allowed to locate one event. */
+    static final int EVENT_ITERATIONS = 200;
+    /** Longest step, as a fraction of the time scale. */
+    static final double MAX_STEP = 1.0 / 50;
+    /** Shortest step, as a fraction of the time scale; a smaller step means the solution broke down. */
+    static final double MIN_STEP = 1e-14;
+    /** Derivative evaluations allowed in one run. */
+    static final int MAX_EVALUATIONS = 50_000_000;
+
+    /**
+     * Scales of one run.
+     *
+     * @param length m, e.g. the expected compression
+     * @param speed  m/s, e.g. the contact speed
+     * @param time   s, e.g. the period of the load on the spring
+     */
+    record Scales(double length, double speed, double time) {
+    }
+
+    private final LumpedChain chain;
+    private final TopFace face;
+    private final ChainEquations equations;
+    private final List<EventHandler> detectors;
+
+    /**
+     * @param jobDetectors the job's own detectors (contact, load speed), beside those the force terms declare
+     */
+    ChainRun(LumpedChain chain, TopFace face, ChainEquations equations, List<EventHandler> jobDetectors) {
+        this.chain = chain;
+        this.face = face;
+        this.equations = equations;
+        List<EventHandler> all = new ArrayList<>(jobDetectors);
+        if (face.hasStop()) {
+            all.add(new SeatDetector(face));
+        }
+        for (ForceTerm term : equations.terms()) {
+            all.addAll(term.detectors());
+        }
+        this.detectors = List.copyOf(all);
+    }
+
+    /**
+     * Integrates from {@code y} at t = 0 until a detector stops the run or {@code tEnd}; {@code y} holds the final
+     * state afterwards.
+     *
+     * @return the final time, s
+     */
+    double run(double[] y, boolean loadOnAtStart, Scales scales, double tEnd, List<StepHandler> handlers) {
+        face.start(y, loadOnAtStart);
+        for (ForceTerm term : equations.terms()) {
+            term.start(y);
+        }
+        int n = chain.masses();
+        double[] abs = new double[equations.getDimension()];
+        Arrays.fill(abs, 0, n + 1, ABSOLUTE_TOLERANCE * scales.length());
+        Arrays.fill(abs, n + 1, abs.length, ABSOLUTE_TOLERANCE * scales.speed());
+        double[] rel = new double[abs.length];
+        Arrays.fill(rel, RELATIVE_TOLERANCE);
+        DormandPrince853Integrator integrator = new DormandPrince853Integrator(MIN_STEP * scales.time(),
+                MAX_STEP * scales.time(), abs, rel);
+        integrator.setMaxEvaluations(MAX_EVALUATIONS);
+        double maxCheck = chain.shortestPeriod() / 2;
+        for (EventHandler h : detectors) {
+            integrator.addEventHandler(h, maxCheck, EVENT_CONVERGENCE * scales.time(), EVENT_ITERATIONS);
+        }
+        handlers.forEach(integrator::addStepHandler);
+        try {
+            return integrator.integrate(equations, 0, y, tEnd, y);
+        } catch (MathIllegalArgumentException | MathIllegalStateException e) {
+            throw new InternalFaultException(String.format(Locale.ROOT,
+                    "the time-domain simulation broke down (N = %d, time scale %.4g s, end %.4g s): %s",
+                    n, scales.time(), tEnd, e.getMessage()), e);
+        }
+    }
+}

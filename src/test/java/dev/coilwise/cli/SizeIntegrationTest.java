@@ -1,0 +1,137 @@
+package dev.coilwise.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** What `size` adds after the search: stock parts, scatter, simulation, specification sheets. */
+class SizeIntegrationTest {
+    static final Path EXAMPLE = Path.of("requirements/arrest-tool-carrier-drop.yaml");
+
+    private static JsonNode json(Path out) throws IOException {
+        return new ObjectMapper().readTree(out.resolve("shortlist.json").toFile());
+    }
+
+    @Test
+    void stockFirstPutsAFeasibleCataloguePartAtRankOneWithItsPartNumber(@TempDir Path out) throws IOException {
+        CliRunner r = CliRunner.run("size", EXAMPLE.toString(), "--out", out.toString(), "--samples", "0", "--masses", "0");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode first = json(out).path("designs").get(0);
+        assertThat(first.path("source").asText()).isEqualTo("stock");
+        assertThat(first.path("part_number").asText()).isNotBlank();
+        assertThat(first.path("supplier").asText()).isNotBlank();
+        assertThat(first.path("unit_price").asDouble()).isPositive();
+        assertThat(r.out()).contains("1S = stock part " + first.path("part_number").asText());
+        String csv = Files.readString(out.resolve("shortlist.csv"));
+        assertThat(csv).contains(first.path("part_number").asText());
+        assertThat(out.resolve("spec-1.pdf")).as("no specification sheet for a stock part").doesNotExist();
+    }
+
+    @Test
+    void everyCustomDesignGetsASpecificationSheetWhosePdfNamesTheOrderingFields(@TempDir Path out) throws IOException {
+        CliRunner r = CliRunner.run("size", EXAMPLE.toString(), "--out", out.toString(), "--samples", "0", "--masses", "0",
+                "--top", "3");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode designs = json(out).path("designs");
+        for (JsonNode d : designs) {
+            int rank = d.path("rank").asInt();
+            boolean custom = "custom".equals(d.path("source").asText());
+            assertThat(Files.exists(out.resolve("spec-" + rank + ".pdf"))).isEqualTo(custom);
+            assertThat(Files.exists(out.resolve("spec-" + rank + ".html"))).isEqualTo(custom);
+            if (custom) {
+                try (PDDocument doc = Loader.loadPDF(out.resolve("spec-" + rank + ".pdf").toFile())) {
+                    String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+                    assertThat(text).contains(d.path("material_standard").asText()).contains("F1").contains("F2")
+                            .contains("EN 15800");
+                }
+            }
+            assertThat(d.path("test_loads")).hasSize(2);
+        }
+    }
+
+    @Test
+    void scatterAndSimulationAppearInJsonCsvAndTableAndAreReproducible(@TempDir Path dir) throws IOException {
+        Path a = dir.resolve("a");
+        Path b = dir.resolve("b");
+        CliRunner r1 = CliRunner.run("size", EXAMPLE.toString(), "--out", a.toString(), "--samples", "2000", "--top", "3");
+        CliRunner r2 = CliRunner.run("size", EXAMPLE.toString(), "--out", b.toString(), "--samples", "2000", "--top", "3");
+        assertThat(r1.code()).as(r1.err()).isZero();
+        assertThat(Files.readString(a.resolve("shortlist.json"))).isEqualTo(Files.readString(b.resolve("shortlist.json")));
+        assertThat(Files.readString(a.resolve("shortlist.csv"))).isEqualTo(Files.readString(b.resolve("shortlist.csv")));
+        for (JsonNode d : json(a).path("designs")) {
+            JsonNode sc = d.path("scatter");
+            assertThat(sc.path("samples").asInt()).isEqualTo(2000);
+            assertThat(sc.path("probability_ok").asDouble()).isBetween(0.0, 1.0);
+            assertThat(sc.path("p01").path("peak_force_N").asDouble())
+                    .isLessThanOrEqualTo(sc.path("p99").path("peak_force_N").asDouble());
+            JsonNode sim = d.path("simulation");
+            assertThat(sim.path("masses").asInt()).isEqualTo(20);
+            assertThat(sim.path("peak_force_N").asDouble()).isPositive();
+            assertThat(sim.has("stop_time_ms")).isTrue();
+        }
+        assertThat(r1.out()).contains("P ok", "sim dev");
+    }
+
+    @Test
+    void robustnessRankingOrdersByTheProbabilityThatEveryLimitHolds(@TempDir Path dir) throws IOException {
+        Path req = dir.resolve("robust.yaml");
+        Files.writeString(req, Files.readString(EXAMPLE).replace("by: mass", "by: robustness")
+                .replace("stock: [../spring-catalogs/demo-metric.csv]", ""));
+        Path out = dir.resolve("out");
+        CliRunner r = CliRunner.run("size", req.toString(), "--out", out.toString(), "--samples", "1000", "--masses", "0",
+                "--top", "4");
+        assertThat(r.code()).as(r.err()).isZero();
+        double previous = 2;
+        for (JsonNode d : json(out).path("designs")) {
+            double p = d.path("scatter").path("probability_ok").asDouble();
+            assertThat(p).isLessThanOrEqualTo(previous);
+            previous = p;
+        }
+    }
+
+    @Test
+    void strictDynamicsDropsFlaggedDesignsAndSaysWhy(@TempDir Path dir) throws IOException {
+        Path req = dir.resolve("strict.yaml");
+        Files.writeString(req, Files.readString(EXAMPLE).replace("shortlist: 10", "shortlist: 3\n  dynamics: strict")
+                .replace("stock: [../spring-catalogs/demo-metric.csv]", ""));
+        CliRunner r = CliRunner.run("size", req.toString(), "--format", "json", "--samples", "0");
+        assertThat(r.code()).as(r.err()).isIn(0, 3);
+        JsonNode root = new ObjectMapper().readTree(r.out());
+        for (JsonNode d : root.path("designs")) {
+            assertThat(d.path("simulation").path("flags")).isEmpty();
+        }
+        boolean anyDropped = root.path("warnings").toString().contains("ranking.dynamics: strict");
+        boolean diagnosed = root.path("diagnosis").path("removed_by").has("dynamics");
+        assertThat(anyDropped || root.path("designs").size() == 3).isTrue();
+        if (root.path("designs").isEmpty()) {
+            assertThat(diagnosed).isTrue();
+        }
+    }
+
+    @Test
+    void simulateWritesATimeHistoryAndAPlot(@TempDir Path out) throws IOException {
+        CliRunner r = CliRunner.run("simulate", "requirements/launch-vertical-ball.yaml", "--design", "2", "--out",
+                out.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("energy balance", "simulation", "exit speed", "CAUTION");
+        assertThat(Files.readAllLines(out.resolve("time-history.csv")).stream().filter(l -> !l.startsWith("#")).count())
+                .isGreaterThan(10);
+        assertThat(Files.readString(out.resolve("time-history.svg"))).contains("<svg").contains("Time (ms)");
+    }
+
+    @Test
+    void simulateRefusesARankOutsideTheShortlist() {
+        CliRunner r = CliRunner.run("simulate", "requirements/launch-vertical-ball.yaml", "--design", "99");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("--design must be between 1 and");
+    }
+}
