@@ -19,6 +19,8 @@ import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.stream.IntStream;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -53,23 +55,25 @@ final class SweepCommand extends BaseCommand {
         MaterialTable table = MaterialTable.loadDefault();
         VariedRequirement base = VariedRequirement.of(file, v.key(), new RequirementReader(table));
         List<String> values = v.texts();
-        List<SweepCsv.Row> rows = new ArrayList<>();
-        Progress progress = new Progress(err(), terminal);
-        Requirement first = null;
-        PrunedSearch search = new PrunedSearch();
+        List<Requirement> reqs = new ArrayList<>();
         for (int i = 0; i < values.size(); i++) {
-            Requirement r;
             try {
-                r = base.with(values.get(i));
+                reqs.add(base.with(values.get(i)));
             } catch (BadInputException e) {
                 throw new BadInputException("--vary step " + (i + 1) + " (" + v.key() + " = " + values.get(i) + "): "
                         + e.getMessage(), e);
             }
-            first = first == null ? r : first;
-            Optional<Candidate> best = search.best(DesignSpace.of(r, table));
-            rows.add(new SweepCsv.Row(values.get(i), best));
-            progress.update(i + 1, values.size());
         }
+        // Steps are independent: size them on every core; each step's result does not depend on thread timing.
+        Progress progress = new Progress(err(), terminal);
+        AtomicInteger done = new AtomicInteger();
+        PrunedSearch search = new PrunedSearch();
+        List<SweepCsv.Row> rows = IntStream.range(0, reqs.size()).parallel().mapToObj(i -> {
+            Optional<Candidate> best = search.best(DesignSpace.of(reqs.get(i), table));
+            progress.update(done.incrementAndGet(), reqs.size());
+            return new SweepCsv.Row(values.get(i), best);
+        }).toList();
+        Requirement first = reqs.get(0);
         progress.finish();
         String csv = SweepCsv.write(v.key(), first.isArrest(), first.ranking().by(), rows);
         if (out == null) {

@@ -100,6 +100,21 @@ final class CriterionBound {
     }
 
     /**
+     * A bound over every design of the family with mean diameter in [dLo, dHi] and active coils in [nLo, nHi]: the
+     * criteria that rise with D and Na at their low ends, the peak force (which falls with both, k ∝ 1/(D³Na)) at
+     * their high ends, and the free length through the solid length alone.
+     */
+    double overFamily(double dLo, double dHi, double nLo, double nHi) {
+        return switch (by) {
+            case PEAK_FORCE -> at(dHi, nHi);
+            case FREE_LENGTH -> Double.isNaN(pocket)
+                    ? family.ends().solidLength(family.wireDiameter(), family.ends().totalCoils(nLo))
+                    : freeLength(dLo, nLo, family.ends().solidLength(family.wireDiameter(), family.ends().totalCoils(nLo)));
+            default -> at(dLo, nLo);
+        };
+    }
+
+    /**
      * A bound for the one cell (D, Na), at least {@link #at}: for a launch, the peak force and the shortest free length
      * with the spring's own active mass Na·π·D·(πd²/4)·ρ in the balance (the cocking force is then exact). Unlike
      * {@link #at} it need not move monotonically with Na, so it may skip a cell but not end a loop.

@@ -122,6 +122,10 @@ final class FamilyScan {
             double extra = f.ends().solidLength(d, f.ends().totalCoils(0)) / d;
             coils[1] = Math.min(coils[1], (long) Math.ceil((maxFree / d - extra) / Grid.COIL_STEP) + 1);
         }
+        if (coils[1] < coils[0] || leader != null && beaten(bound.overFamily(g.length(dLo), g.length(dHi), g.coils(coils[0]),
+                g.coils(coils[1])))) {
+            return; // only when another family's best is known: the family's own incumbent is still empty
+        }
         forceCap = req.limits().peakForce().orElse(Double.POSITIVE_INFINITY);
         if (arrest != null && req.limits().deceleration().isPresent()) {
             forceCap = Math.min(forceCap, arrest.mass() * req.limits().deceleration().getAsDouble() + push);
@@ -132,6 +136,8 @@ final class FamilyScan {
         long[] order = new long[size];
         double[] bounds = new double[size];
         double[] masses = new double[size];
+        long[] lows = new long[size];
+        long[] highs = new long[size];
         long[] window = new long[2];
         int n = 0;
         for (int i = 0; i < size; i++) {
@@ -139,6 +145,8 @@ final class FamilyScan {
             if (coilWindow(dm, coils, window)) {
                 bounds[i] = bound.at(dm, g.coils(bound.fallsWithCoils() ? window[1] : window[0]));
                 masses[i] = bound.mass(dm, g.coils(window[0]));
+                lows[i] = window[0];
+                highs[i] = window[1];
                 order[n++] = (long) Float.floatToIntBits((float) bounds[i]) << 32 | i;
             }
         }
@@ -147,7 +155,7 @@ final class FamilyScan {
         for (int k = 0; k < n; k++) {
             int i = (int) order[k];
             if (!beaten(bounds[i], masses[i])) {
-                Cells c = cells(g.length(dLo + i), coils);
+                Cells c = cells(g.length(dLo + i), lows[i], highs[i]);
                 if (c != null && !beaten(c.bound(), c.mass())) {
                     searchDiameter(c);
                 }
@@ -220,16 +228,10 @@ final class FamilyScan {
         return nLo <= nHi;
     }
 
-    /** The cells of one mean diameter: {@link #coilWindow} narrowed by coil bind or the free-length limit. */
-    private Cells cells(double dm, long[] coils) {
-        long[] window = new long[2];
-        if (!coilWindow(dm, coils, window)) {
-            return null;
-        }
+    /** The cells of one mean diameter: its {@link #coilWindow} narrowed by coil bind or the free-length limit. */
+    private Cells cells(double dm, long nLo, long nHi) {
         double fAllow = Stress.forceFor(limits.allowableStress(), dm, d);
         double maxForce = Math.min(forceCap, req.spring().solidSafe() ? fAllow / (1 + xi) : fAllow);
-        long nLo = window[0];
-        long nHi = window[1];
         if (!Double.isNaN(pocket)) {
             nHi = Math.min(nHi, lastBindable(dm, nLo, nHi) + 2);
         } else if (maxFree < Double.POSITIVE_INFINITY && nLo <= nHi) {
