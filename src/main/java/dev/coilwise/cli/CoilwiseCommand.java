@@ -14,8 +14,9 @@ import picocli.CommandLine.Spec;
         header = "Sizes helical compression springs that arrest a moving load or launch a payload.",
         description = {"Springs store energy, and launched payloads and failing buffers can hurt people. Results are"
             + " a design aid: confirm them by test; local codes, standards and licensed engineering practice govern."},
-        subcommands = {SizeCommand.class, CheckCommand.class, SimulateCommand.class, MaterialsCommand.class, NewCommand.class,
-            SchemaCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {SizeCommand.class, CheckCommand.class, SimulateCommand.class, ReportCommand.class,
+            SweepCommand.class, MaterialsCommand.class, NewCommand.class, SchemaCommand.class,
+            CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n", exitCodeList = {
             "0:Success.",
             "1:Internal fault (a bug); run with --debug for the stack trace.",

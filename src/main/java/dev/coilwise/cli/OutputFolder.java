@@ -76,6 +76,7 @@ final class OutputFolder {
                 Path tmp = Files.createTempFile(dir, "." + f.getKey() + ".", ".tmp");
                 staged.put(f.getKey(), tmp);
                 write(tmp, f.getValue());
+                readableByAll(tmp);
             }
             for (String name : files.keySet()) {
                 Path target = dir.resolve(name);
@@ -177,6 +178,15 @@ final class OutputFolder {
         String reason = e instanceof FileSystemException fse && fse.getReason() != null ? fse.getReason()
                 : e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
         return new BadInputException("--out " + dir + ": " + what + " (" + reason + "); the folder was left as it was");
+    }
+
+    /** Temporary files are created owner-only; outputs are ordinary files (rw-r--r--) like any a user writes. */
+    private static void readableByAll(Path p) throws IOException {
+        try {
+            Files.setPosixFilePermissions(p, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+        } catch (UnsupportedOperationException e) {
+            // not a POSIX file system: the default permissions stand
+        }
     }
 
     private static void move(Path from, Path to) throws IOException {

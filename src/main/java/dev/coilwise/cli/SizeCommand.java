@@ -16,6 +16,8 @@ import dev.coilwise.report.ShortlistTable;
 import dev.coilwise.report.SpecSheet;
 import dev.coilwise.report.SpecSheetHtmlWriter;
 import dev.coilwise.report.SpecSheetPdfWriter;
+import dev.coilwise.report.html.HtmlReportWriter;
+import dev.coilwise.report.html.ReportData;
 import dev.coilwise.requirement.RequirementReader;
 import dev.coilwise.scatter.ScatterSettings;
 import dev.coilwise.search.PrunedSearch;
@@ -39,8 +41,8 @@ import picocli.CommandLine.Parameters;
             + " lengths, keeps the designs that meet every limit (beside feasible stock parts when the file lists"
             + " catalogues), checks the shortlist against manufacturing scatter and with a time-domain simulation,"
             + " and prints it.",
-            "With --out DIR, writes shortlist.csv, shortlist.json and, for each custom design, a specification sheet"
-            + " (spec-N.pdf and spec-N.html) to DIR."})
+            "With --out DIR, writes shortlist.csv, shortlist.json, report.html (one self-contained page with charts)"
+            + " and, for each custom design, a specification sheet (spec-N.pdf and spec-N.html) to DIR."})
 final class SizeCommand extends BaseCommand {
     enum Format { table, csv, json }
 
@@ -111,21 +113,25 @@ final class SizeCommand extends BaseCommand {
                     + (cat.demo() ? " (demo data)" : "") + (w.isEmpty() ? "" : ", " + w.size() + " warnings (first: "
                     + w.get(0) + ")"));
         }
-        Progress progress = new Progress(err(), "scatter");
+        Progress progress = new Progress(err(), "scatter", System.console() != null);
         SizingOptions options = new SizingOptions(
                 samples == 0 ? Optional.empty() : Optional.of(ScatterSettings.defaults().withSamples(samples).withSeed(seed)),
-                progress, masses == 0 ? Optional.empty() : Optional.of(SimulationOptions.defaults().withMasses(masses)));
+                progress, masses == 0 ? Optional.empty()
+                        : Optional.of(SimulationOptions.defaults().withMasses(masses).withHistory(true)));
         SizingResult result = new Sizer(table, new PrunedSearch(), options).size(req, stock)
                 .withLeadingWarnings(catalogueNotes);
-        progress.close();
+        progress.finish();
         DisplayUnits du = new DisplayUnits(units == null ? req.units() : units == Units.us ? UnitSystem.US : UnitSystem.SI);
-        String json = ShortlistJson.write(result);
-        String csv = ShortlistCsv.write(result);
+        // Rendered only when asked for: the JSON writer's start-up alone is a large share of a short run.
+        boolean files = out != null;
+        String json = files || format == Format.json ? ShortlistJson.write(result) : null;
+        String csv = files || format == Format.csv ? ShortlistCsv.write(result) : null;
         List<String> written = new ArrayList<>();
-        if (out != null) {
+        if (files) {
             OutputFolder folder = new OutputFolder(out, inputs(req));
             folder.add("shortlist.json", json);
             folder.add("shortlist.csv", csv);
+            folder.add("report.html", HtmlReportWriter.write(ReportData.parse(json)));
             addSpecSheets(folder, result);
             folder.commit().forEach(p -> written.add(p.getFileName().toString()));
         }

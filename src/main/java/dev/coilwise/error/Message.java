@@ -75,7 +75,13 @@ public enum Message {
     CATALOG_BAD_NUMBER("%s must be a number in %s, got '%s'", 3),
     CATALOG_RAGGED_ROW("row has %d fields but the header has %d", 2),
     CATALOG_STATED_DIFFERS("stated %s %.4g %s differs from the computed %.4g %s by %.0f %% (more than %.0f %%); the part is evaluated with the computed value", 7),
-    CATALOG_INVALID("%s: %d error(s); nothing was imported (fix the rows, or read the catalogue leniently to skip them):%n%s", 3);
+    CATALOG_INVALID("%s: %d error(s); nothing was imported (fix the rows, or read the catalogue leniently to skip them):%n%s", 3),
+
+    // Saved shortlists read back by `coilwise report` (dev.coilwise.report.html).
+    JSON_SYNTAX("not valid JSON: %s", 1),
+    NOT_A_SHORTLIST("not a coilwise shortlist (format is %s); give the shortlist.json that 'coilwise size --out' writes", 1),
+    SHORTLIST_VERSION("shortlist format version %s is not supported; this coilwise reads version %d", 2),
+    SAVED_FIELD("%s is %s; expected %s", 3);
 
     private final String template;
     private final int arity;

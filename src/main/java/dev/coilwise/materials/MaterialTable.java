@@ -1,7 +1,11 @@
 package dev.coilwise.materials;
 
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.InternalFaultException;
@@ -52,7 +56,11 @@ public final class MaterialTable {
     /** Parses a table in the bundled format (see the header comment of materials.yaml for units). */
     public static MaterialTable parse(String yaml) {
         try {
-            JsonNode root = new ObjectMapper(new YAMLFactory()).readTree(yaml);
+            JsonNode root;
+            try (JsonParser p = new YAMLFactory().createParser(yaml)) {
+                p.nextToken();
+                root = tree(p);
+            }
             List<Material> list = new ArrayList<>();
             for (JsonNode n : root.path("materials")) {
                 List<StrengthBand> bands = new ArrayList<>();
@@ -74,6 +82,38 @@ public final class MaterialTable {
         } catch (IOException e) {
             throw new InternalFaultException("material table is not valid YAML: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * The value at the parser's current token as a tree, read with the streaming parser alone: building Jackson's
+     * ObjectMapper would cost several hundred milliseconds at start-up for a table this small.
+     */
+    private static JsonNode tree(JsonParser p) throws IOException {
+        JsonNodeFactory f = JsonNodeFactory.instance;
+        JsonToken t = p.currentToken();
+        if (t == JsonToken.START_OBJECT) {
+            ObjectNode o = f.objectNode();
+            while (p.nextToken() == JsonToken.FIELD_NAME) {
+                String key = p.currentName();
+                p.nextToken();
+                o.set(key, tree(p));
+            }
+            return o;
+        }
+        if (t == JsonToken.START_ARRAY) {
+            ArrayNode a = f.arrayNode();
+            while (p.nextToken() != JsonToken.END_ARRAY) {
+                a.add(tree(p));
+            }
+            return a;
+        }
+        if (t == JsonToken.VALUE_NUMBER_INT || t == JsonToken.VALUE_NUMBER_FLOAT) {
+            return f.numberNode(p.getDoubleValue());
+        }
+        if (t == JsonToken.VALUE_TRUE || t == JsonToken.VALUE_FALSE) {
+            return f.booleanNode(t == JsonToken.VALUE_TRUE);
+        }
+        return t == JsonToken.VALUE_NULL || t == null ? f.nullNode() : f.textNode(p.getText());
     }
 
     private static String sourcesHeader(String yaml) {

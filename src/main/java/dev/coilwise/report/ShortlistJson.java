@@ -3,6 +3,7 @@ package dev.coilwise.report;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.coilwise.dynamics.SimulationSummary;
+import dev.coilwise.dynamics.TimeHistory;
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.mechanics.Margin;
 import dev.coilwise.model.Arrest;
@@ -12,6 +13,7 @@ import dev.coilwise.model.Limits;
 import dev.coilwise.model.Requirement;
 import dev.coilwise.model.Spring;
 import dev.coilwise.model.SpringOptions;
+import dev.coilwise.search.Candidate;
 import dev.coilwise.search.Diagnosis;
 import dev.coilwise.search.LimitConflict;
 import dev.coilwise.search.NearMiss;
@@ -26,6 +28,8 @@ import java.io.UncheckedIOException;
 public final class ShortlistJson {
     /** Format version of shortlist.json. */
     public static final int FORMAT = 1;
+    /** Most rows of a time history kept in shortlist.json (enough for a chart; the full one is simulate's CSV). */
+    public static final int HISTORY_ROWS = 240;
 
     private ShortlistJson() {
     }
@@ -50,6 +54,7 @@ public final class ShortlistJson {
         for (ShortlistEntry e : r.shortlist()) {
             designs.add(design(e, grade));
         }
+        root.set("feasible_families", families(r));
         if (r.diagnosis().isPresent()) {
             root.set("diagnosis", diagnosis(r.diagnosis().get(), r.requirement()));
         }
@@ -138,6 +143,41 @@ public final class ShortlistJson {
         return n;
     }
 
+    /**
+     * The best custom design of every family that has a feasible one, in the order of the ranking criterion, with
+     * {@code shortlist_rank} on those that made the shortlist: a few figures each, enough to draw the trade-off
+     * between families without searching again.
+     */
+    static ArrayNode families(SizingResult r) {
+        java.util.Map<Integer, Integer> shortlisted = new java.util.HashMap<>();
+        for (ShortlistEntry e : r.shortlist()) {
+            if (!e.candidate().isStock()) {
+                shortlisted.put(e.candidate().family().order(), e.rank());
+            }
+        }
+        ArrayNode arr = Json.MAPPER.createArrayNode();
+        for (int i = 0; i < r.search().best().size(); i++) {
+            Candidate c = r.search().best().get(i);
+            Evaluation e = c.evaluation();
+            Spring sp = e.spring();
+            ObjectNode o = arr.addObject();
+            o.put("search_rank", i + 1);
+            Integer rank = shortlisted.get(c.family().order());
+            if (rank != null) {
+                o.put("shortlist_rank", rank);
+            }
+            o.put("material", sp.material().key());
+            o.put("ends", sp.ends().key());
+            Json.put(o, "wire_diameter_mm", sp.wireDiameter() * 1e3);
+            Json.put(o, "outer_diameter_mm", sp.outerDiameter() * 1e3);
+            Json.put(o, "free_length_mm", sp.freeLength() * 1e3);
+            Json.put(o, "solid_length_mm", sp.solidLength() * 1e3);
+            Json.put(o, "mass_g", e.mass() * 1e3);
+            Json.put(o, "arrest".equals(e.job()) ? "peak_force_N" : "cocking_force_N", e.peakForce());
+        }
+        return arr;
+    }
+
     static ObjectNode design(ShortlistEntry entry, int grade) {
         Evaluation e = entry.evaluation();
         Spring s = e.spring();
@@ -223,7 +263,13 @@ public final class ShortlistJson {
             Json.put(t, "force_tolerance_N", tp.forceTolerance());
             t.put("grade", tp.grade());
         }
-        entry.simulation().ifPresent(sim -> n.set("simulation", simulation(sim, "arrest".equals(e.job()))));
+        entry.simulation().ifPresent(sim -> {
+            ObjectNode sn = simulation(sim, "arrest".equals(e.job()));
+            if (!entry.history().isEmpty()) {
+                sn.set("history", history(entry.history()));
+            }
+            n.set("simulation", sn);
+        });
         n.set("margins", margins(e));
         return n;
     }
@@ -252,6 +298,44 @@ public final class ShortlistJson {
         ArrayNode notes = s.putArray("notes");
         sim.notes().forEach(notes::add);
         return s;
+    }
+
+    /**
+     * The time history, thinned to at most {@link #HISTORY_ROWS} rows for charts: evenly spaced rows, plus the first
+     * and last and the rows of the largest travel and the largest force, so the peaks survive the thinning.
+     */
+    static ObjectNode history(TimeHistory h) {
+        double[] t = h.time();
+        double[] x = h.loadPosition();
+        double[] f = h.topForce();
+        java.util.TreeSet<Integer> rows = new java.util.TreeSet<>();
+        int stride = Math.max(1, (int) Math.ceil(t.length / (double) (HISTORY_ROWS - 3)));
+        for (int i = 0; i < t.length; i += stride) {
+            rows.add(i);
+        }
+        rows.add(t.length - 1);
+        rows.add(argMax(x));
+        rows.add(argMax(f));
+        ObjectNode n = Json.MAPPER.createObjectNode();
+        ArrayNode time = n.putArray("time_ms");
+        ArrayNode travel = n.putArray("load_position_mm");
+        ArrayNode force = n.putArray("top_force_N");
+        for (int i : rows) {
+            time.add(Json.num(t[i] * 1e3));
+            travel.add(Json.num(x[i] * 1e3));
+            force.add(Json.num(f[i]));
+        }
+        return n;
+    }
+
+    private static int argMax(double[] v) {
+        int best = 0;
+        for (int i = 1; i < v.length; i++) {
+            if (v[i] > v[best]) {
+                best = i;
+            }
+        }
+        return best;
     }
 
     static ArrayNode margins(Evaluation e) {

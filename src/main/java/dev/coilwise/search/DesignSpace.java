@@ -53,14 +53,21 @@ public record DesignSpace(Requirement requirement, Grid grid, List<Material> mat
 
     /** Longest free length of the grid for a cell with solid length {@code ls} and rate {@code k}, m. */
     public double freeLengthCap(Family f, double meanDiameter, double ls, double k) {
+        double allow = f.material().allowableStress(f.wireDiameter(), requirement.spring().setRemoved());
+        return freeLengthCap(Stress.forceFor(allow, meanDiameter, f.wireDiameter()), ls, k);
+    }
+
+    /**
+     * The same cap from the force at which the corrected stress reaches the allowable ({@code allowableForce}, N) at
+     * this cell's diameter, for callers that already have it.
+     */
+    double freeLengthCap(double allowableForce, double ls, double k) {
         Requirement req = requirement;
         if (req.envelope().maxFreeLength().isPresent()) {
             return req.envelope().maxFreeLength().getAsDouble();
         }
         if (req.job() instanceof Arrest && req.envelope().pocketLength().isPresent()) {
-            double allow = f.material().allowableStress(f.wireDiameter(), req.spring().setRemoved());
-            double fAllow = Stress.forceFor(allow, meanDiameter, f.wireDiameter());
-            return req.envelope().pocketLength().getAsDouble() + fAllow / k + grid.step();
+            return req.envelope().pocketLength().getAsDouble() + allowableForce / k + grid.step();
         }
         return ls + (1 + req.spring().clashAllowance()) * req.limits().stroke() + 2 * grid.step();
     }

@@ -1,7 +1,9 @@
 package dev.coilwise.search;
 
+import dev.coilwise.error.InternalFaultException;
 import dev.coilwise.mechanics.DesignEvaluator;
 import dev.coilwise.mechanics.Evaluation;
+import dev.coilwise.mechanics.HardLimits;
 import dev.coilwise.model.RankBy;
 import dev.coilwise.model.Spring;
 import java.util.Comparator;
@@ -13,6 +15,8 @@ final class FamilyBest {
     private final RankBy by;
     private final Comparator<Candidate> order;
     private Candidate best;
+    private double incumbent = Double.POSITIVE_INFINITY;
+    private double incumbentMass = Double.POSITIVE_INFINITY;
     long evaluated;
     long feasible;
 
@@ -23,24 +27,55 @@ final class FamilyBest {
         this.order = Objective.comparator(by);
     }
 
-    /** Evaluates one spring, keeps it if it is feasible and better than the incumbent; returns whether feasible. */
+    /** Evaluates one spring in full, keeps it if it is feasible and better than the incumbent; returns whether feasible. */
     boolean offer(Spring s) {
         Evaluation e = DesignEvaluator.evaluate(s, space.requirement());
         evaluated++;
         if (!e.feasible()) {
             return false;
         }
+        keep(e);
+        return true;
+    }
+
+    /**
+     * Checks one design of this family with {@code limits} (this family's {@link HardLimits}) and evaluates it in full
+     * only when it passes; keeps it if it is better than the incumbent. Returns whether it is feasible.
+     */
+    boolean offer(HardLimits limits, double meanDiameter, double activeCoils, double freeLength) {
+        evaluated++;
+        if (!limits.feasible(family.ends(), meanDiameter, activeCoils, freeLength)) {
+            return false;
+        }
+        Spring s = new Spring(family.material(), family.ends(), family.wireDiameter(), meanDiameter, activeCoils,
+                freeLength);
+        Evaluation e = DesignEvaluator.evaluate(s, space.requirement());
+        if (!e.feasible()) {
+            throw new InternalFaultException("the quick feasibility check passed " + s
+                    + ", which the full evaluation rejects on " + e.violations());
+        }
+        keep(e);
+        return true;
+    }
+
+    private void keep(Evaluation e) {
         feasible++;
         Candidate c = new Candidate(family, e);
         if (best == null || order.compare(c, best) < 0) {
             best = c;
+            incumbent = Objective.value(by, e);
+            incumbentMass = e.mass();
         }
-        return true;
     }
 
     /** Criterion value of the incumbent, or +∞ when there is none. */
     double incumbent() {
-        return best == null ? Double.POSITIVE_INFINITY : Objective.value(by, best.evaluation());
+        return incumbent;
+    }
+
+    /** Mass of the incumbent, kg, or +∞ when there is none. */
+    double incumbentMass() {
+        return incumbentMass;
     }
 
     Candidate best() {

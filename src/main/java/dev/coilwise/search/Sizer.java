@@ -4,6 +4,7 @@ import dev.coilwise.catalog.StockEvaluation;
 import dev.coilwise.catalog.StockEvaluator;
 import dev.coilwise.catalog.StockPart;
 import dev.coilwise.dynamics.SimulationOptions;
+import dev.coilwise.dynamics.SimulationResult;
 import dev.coilwise.dynamics.SimulationSummary;
 import dev.coilwise.dynamics.Simulator;
 import dev.coilwise.materials.MaterialTable;
@@ -100,8 +101,10 @@ public final class Sizer {
         for (ShortlistEntry e : ranked) {
             e.evaluation().margins().stream().filter(m -> !m.hard() && !m.holds()).forEach(m -> warnings.add(
                     "design " + e.rank() + ": " + softWarning(m)));
-            e.simulation().ifPresent(s -> s.flags().forEach(f -> warnings.add("design " + e.rank() + " (simulation): " + f)));
+            e.simulation().ifPresent(s -> s.flags().stream().filter(f -> !f.contains(DEVIATION_FLAG))
+                    .forEach(f -> warnings.add("design " + e.rank() + " (simulation): " + f)));
         }
+        deviationSummary(ranked).ifPresent(warnings::add);
         Optional<Diagnosis> diagnosis = Optional.empty();
         if (ranked.isEmpty()) {
             diagnosis = Optional.of(removed.isEmpty() ? Diagnoser.diagnose(space)
@@ -120,14 +123,15 @@ public final class Sizer {
         while (kept.size() < n && next < entries.size()) {
             List<ShortlistEntry> batch = entries.subList(next, Math.min(entries.size(), next + n - kept.size()));
             next += batch.size();
-            List<SimulationSummary> sims = batch.parallelStream()
-                    .map(e -> Simulator.simulate(e.evaluation().spring(), req, e.evaluation(), opt).summary()).toList();
+            List<SimulationResult> sims = batch.parallelStream()
+                    .map(e -> Simulator.simulate(e.evaluation().spring(), req, e.evaluation(), opt)).toList();
             for (int i = 0; i < batch.size(); i++) {
-                if (strict && sims.get(i).flagged()) {
+                SimulationSummary summary = sims.get(i).summary();
+                if (strict && summary.flagged()) {
                     dropped++;
                     Candidate c = batch.get(i).candidate();
                     warnings.add("left the shortlist under ranking.dynamics: strict: " + describe(c) + ": "
-                            + String.join("; ", sims.get(i).flags()));
+                            + String.join("; ", summary.flags()));
                 } else {
                     kept.add(batch.get(i).withSimulation(sims.get(i)));
                 }
@@ -137,6 +141,27 @@ public final class Sizer {
             removed.put("dynamics", dropped);
         }
         return kept;
+    }
+
+    /** Words of the simulation's flag for a figure more than 5 % from the energy balance. */
+    private static final String DEVIATION_FLAG = "differs from the energy balance";
+
+    /** One line for every design whose simulated figures differ from the balance by more than 5 %. */
+    private static Optional<String> deviationSummary(List<ShortlistEntry> ranked) {
+        List<ShortlistEntry> off = ranked.stream().filter(e -> e.simulation().map(s -> s.flags().stream()
+                .anyMatch(f -> f.contains(DEVIATION_FLAG))).orElse(false)).toList();
+        if (off.isEmpty()) {
+            return Optional.empty();
+        }
+        double lo = off.stream().mapToDouble(e -> e.simulation().get().deviationPct()).min().orElse(0);
+        double hi = off.stream().mapToDouble(e -> e.simulation().get().deviationPct()).max().orElse(0);
+        String which = off.size() == ranked.size() ? "every design" : "design" + (off.size() > 1 ? "s " : " ")
+                + String.join(", ", off.stream().map(e -> String.valueOf(e.rank())).toList());
+        boolean arrest = ranked.get(0).evaluation().job().equals("arrest");
+        return Optional.of(String.format(java.util.Locale.ROOT, "simulation: %s differs from the energy balance by"
+                + " %.1f to %.1f %% (%s); the simulation block of each design in shortlist.json has the figures",
+                which, lo, hi, arrest ? "an impact sends a stress wave along the coils, so the struck end sees more"
+                        + " force than the quasi-static balance" : "the spring spends energy moving its own coils"));
     }
 
     private static String describe(Candidate c) {

@@ -1,0 +1,72 @@
+package dev.coilwise.report.html;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import dev.coilwise.search.Diagnosis;
+import dev.coilwise.search.NearMiss;
+import dev.coilwise.search.SizingResult;
+import java.util.List;
+import java.util.Map;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.select.Elements;
+import org.junit.jupiter.api.Test;
+
+/** An infeasible sizing renders its diagnosis: the limits that removed candidates and the nearest misses. */
+class DiagnosisReportTest {
+    private final SizingResult result = ReportFixtures.sized("arrest-infeasible");
+    private final Document doc = Jsoup.parse(HtmlReportWriter.write(ReportData.of(result)));
+
+    @Test
+    void theCaseHasNoFeasibleDesign() {
+        assertThat(result.feasible()).isFalse();
+        assertThat(result.diagnosis()).isPresent();
+    }
+
+    @Test
+    void everyLimitThatRemovedCandidatesIsListedWithItsCount() {
+        Diagnosis d = result.diagnosis().orElseThrow();
+        Elements rows = doc.select("#diagnosis table.removed tbody tr");
+        assertThat(rows).hasSize(d.removedBy().size());
+        int i = 0;
+        for (Map.Entry<String, Long> e : d.removedBy().entrySet()) {
+            assertThat(rows.get(i).child(0).text()).isEqualTo(LimitNames.of(e.getKey(), true));
+            assertThat(rows.get(i).child(1).text()).isEqualTo(String.valueOf(e.getValue()));
+            i++;
+        }
+        assertThat(doc.select("#diagnosis p").eachText()).anyMatch(t -> t.contains("sampled " + d.sampled()
+                + " candidates"));
+    }
+
+    @Test
+    void eachNearMissSaysWhatToRelax() {
+        List<NearMiss> misses = result.diagnosis().orElseThrow().nearest();
+        assertThat(misses).as("the demo case has near misses").isNotEmpty();
+        Elements rows = doc.select("#diagnosis table.misses tbody tr");
+        assertThat(rows).hasSize(misses.size());
+        for (int i = 0; i < misses.size(); i++) {
+            assertThat(rows.get(i).child(0).text()).isEqualTo(misses.get(i).evaluation().spring().material().key());
+            assertThat(rows.get(i).child(6).text()).isEqualTo(LimitNames.of(misses.get(i).violated().key(), true));
+            assertThat(rows.get(i).child(8).text()).startsWith("allow ").contains("(limits.stroke)");
+        }
+    }
+
+    @Test
+    void noShortlistTradeOffOrDesignSectionIsShown() {
+        assertThat(doc.select("#shortlist, #trade-off, section.design, svg")).isEmpty();
+        assertThat(doc.selectFirst("header .verdict").text()).startsWith("No design meets every limit.");
+    }
+
+    @Test
+    void aForceLimitNoSpringCanMeetIsExplainedWithWhatToChange() {
+        SizingResult conflict = ReportFixtures.sized("arrest-force-conflict");
+        Diagnosis d = conflict.diagnosis().orElseThrow();
+        assertThat(d.conflicts()).as("the demo case's force limit is below the work-energy bound").isNotEmpty();
+        Document page = Jsoup.parse(HtmlReportWriter.write(ReportData.of(conflict)));
+        List<String> shown = page.select("#diagnosis ul.conflicts li").eachText();
+        assertThat(shown).hasSize(d.conflicts().size());
+        assertThat(shown.get(0)).startsWith("limits.peak_force 100 N is below ").contains("raise limits.peak_force");
+        assertThat(doc.select("#diagnosis ul.conflicts li")).as("the stroke-limited case has its own conflicts")
+                .hasSize(result.diagnosis().orElseThrow().conflicts().size());
+    }
+}
