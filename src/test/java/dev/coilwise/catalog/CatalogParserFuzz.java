@@ -1,0 +1,58 @@
+package dev.coilwise.catalog;
+
+import dev.coilwise.testing.TextMutations;
+import java.util.EnumMap;
+import java.util.Map;
+import java.util.concurrent.atomic.AtomicLong;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.EdgeCasesMode;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.Tag;
+import net.jqwik.api.lifecycle.AfterContainer;
+
+/**
+ * The fuzz run of the catalogue reader: the checks of {@link CatalogParserProperties} on many more mutants. Tagged
+ * {@code fuzz}; run it with {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=CatalogParserFuzz}
+ * (docs/reliability.md). Prints how many inputs it tried and what became of them.
+ */
+@Tag("fuzz")
+class CatalogParserFuzz {
+    static final int TRIES = 20_000;
+    private static final Map<CatalogParserProperties.Outcome, AtomicLong> NATIVE = counts();
+    private static final Map<CatalogParserProperties.Outcome, AtomicLong> EXPORT = counts();
+
+    private static Map<CatalogParserProperties.Outcome, AtomicLong> counts() {
+        Map<CatalogParserProperties.Outcome, AtomicLong> m = new EnumMap<>(CatalogParserProperties.Outcome.class);
+        for (CatalogParserProperties.Outcome o : CatalogParserProperties.Outcome.values()) {
+            m.put(o, new AtomicLong());
+        }
+        return m;
+    }
+
+    @Provide
+    Arbitrary<String> nativeMutants() {
+        return TextMutations.csv(CatalogParserProperties.nativeBases());
+    }
+
+    @Provide
+    Arbitrary<String> exportMutants() {
+        return TextMutations.csv(CatalogParserProperties.exportBases());
+    }
+
+    @Property(tries = TRIES, edgeCases = EdgeCasesMode.NONE)
+    void ourFormatIsReadOrRefusedWithAMessage(@ForAll("nativeMutants") String csv) {
+        NATIVE.get(CatalogParserProperties.readsOrRefuses(csv, null)).incrementAndGet();
+    }
+
+    @Property(tries = TRIES, edgeCases = EdgeCasesMode.NONE)
+    void aMappedExportIsReadOrRefusedWithAMessage(@ForAll("exportMutants") String csv) {
+        EXPORT.get(CatalogParserProperties.readsOrRefuses(csv, CatalogParserProperties.EXPORT_MAPPING)).incrementAndGet();
+    }
+
+    @AfterContainer
+    static void report() {
+        System.out.println("catalogue fuzz: our format " + NATIVE + "; mapped export " + EXPORT);
+    }
+}

@@ -1,0 +1,37 @@
+package dev.coilwise.cli;
+
+import java.io.IOException;
+import java.util.Map;
+import java.util.TreeMap;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.EdgeCasesMode;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.Tag;
+import net.jqwik.api.lifecycle.AfterContainer;
+
+/**
+ * The fuzz run of the command line: {@link CliMutationProperties}'s check on many more mutants. Tagged {@code fuzz};
+ * run it with {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=CliMutationFuzz} (docs/reliability.md). Prints
+ * how many inputs it tried and their exit codes.
+ */
+@Tag("fuzz")
+class CliMutationFuzz {
+    private static final Map<Integer, Integer> CODES = new TreeMap<>();
+
+    @Provide
+    Arbitrary<String> mutants() {
+        return dev.coilwise.testing.TextMutations.yaml(CliMutationProperties.bases());
+    }
+
+    @Property(tries = 1500, edgeCases = EdgeCasesMode.NONE)
+    void sizeExitsZeroTwoOrThreeWithAMessage(@ForAll("mutants") String yaml) throws IOException {
+        CODES.merge(CliMutationProperties.check(yaml), 1, Integer::sum);
+    }
+
+    @AfterContainer
+    static void report() {
+        System.out.println("command-line fuzz: exit codes " + CODES);
+    }
+}
