@@ -53,8 +53,7 @@ final class OutputFolder {
     }
 
     void add(String name, byte[] bytes) {
-        if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals(".") || name.equals("..")
-                || name.startsWith(".")) {
+        if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals(".") || name.equals("..")) {
             throw new IllegalArgumentException("not a plain output file name: " + name);
         }
         files.put(name, bytes.clone());
@@ -110,7 +109,7 @@ final class OutputFolder {
             Path target = dir.resolve(name);
             if (in.contains(canonical(target)) || isSameFileAsAnInput(target)) {
                 throw new BadInputException("--out " + dir + " would overwrite the input file " + target
-                        + "; choose another output folder");
+                        + "; write the output elsewhere");
             }
             if (Files.isDirectory(target, LinkOption.NOFOLLOW_LINKS)) {
                 throw new BadInputException("--out " + dir + " holds a folder named " + name

@@ -11,11 +11,8 @@ import dev.coilwise.search.Candidate;
 import dev.coilwise.search.DesignSpace;
 import dev.coilwise.search.PrunedSearch;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -85,28 +82,15 @@ final class SweepCommand extends BaseCommand {
         return rows.stream().anyMatch(r -> r.best().isPresent()) ? ExitCode.OK : ExitCode.NOTHING_FEASIBLE;
     }
 
-    /** Writes through a temporary file in the same folder and a move over the name, never over the input. */
-    private void write(Path target, String text) throws IOException {
+    /** Writes through {@link OutputFolder}: a temporary file in the same folder moved over the name, never over the input. */
+    private void write(Path target, String text) {
         Path t = target.toAbsolutePath().normalize();
-        if (t.equals(file.toAbsolutePath().normalize())) {
-            throw new BadInputException("--out " + target + " would overwrite the input file; choose another file");
-        }
         if (Files.isDirectory(t)) {
             throw new BadInputException("--out " + target + " is a folder; give a file name");
         }
-        Path dir = t.getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + t.getFileName() + ".", ".tmp");
-        try {
-            Files.writeString(tmp, text, StandardCharsets.UTF_8);
-            try {
-                Files.move(tmp, t, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, t, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        OutputFolder folder = new OutputFolder(t.getParent(), List.of(file));
+        folder.add(t.getFileName().toString(), text);
+        folder.commit();
     }
 
     /** Converts {@code value} from {@code fromUnit} to {@code toUnit}, both read by the requirement reader's unit parser. */

@@ -51,7 +51,7 @@ public final class SweepCsv {
     }
 
     private static List<Object> row(int step, Row r, boolean arrest, RankBy by, int columns) {
-        List<Object> row = new ArrayList<>(List.of(step, r.value()));
+        List<Object> row = new ArrayList<>(List.of(step, CsvCells.safe(r.value())));
         if (r.best().isEmpty()) {
             row.add("no");
             while (row.size() < columns) {

@@ -30,8 +30,32 @@ class CliMutationFuzz {
         CODES.merge(CliMutationProperties.check(yaml), 1, Integer::sum);
     }
 
+    private static final Map<Integer, Integer> CHECK = new TreeMap<>();
+    private static final Map<Integer, Integer> REPORT = new TreeMap<>();
+
+    @Provide
+    Arbitrary<String> springMutants() {
+        return new CliMutationProperties().springMutants();
+    }
+
+    @Provide
+    Arbitrary<String> shortlistMutants() {
+        return new CliMutationProperties().shortlistMutants();
+    }
+
+    @Property(tries = 1000, edgeCases = EdgeCasesMode.NONE)
+    void checkAndSimulateExitZeroTwoOrThreeWithAMessage(@ForAll("springMutants") String spring) throws IOException {
+        CHECK.merge(CliMutationProperties.checkSpring(spring), 1, Integer::sum);
+    }
+
+    @Property(tries = 2000, edgeCases = EdgeCasesMode.NONE)
+    void reportExitsZeroTwoOrThreeWithAMessage(@ForAll("shortlistMutants") String json) throws IOException {
+        REPORT.merge(CliMutationProperties.checkReport(json), 1, Integer::sum);
+    }
+
     @AfterContainer
     static void report() {
-        System.out.println("command-line fuzz: exit codes " + CODES);
+        System.out.println("command-line fuzz: size exit codes " + CODES + "; check (and simulate) " + CHECK
+                + "; report " + REPORT);
     }
 }

@@ -18,7 +18,8 @@ import net.jqwik.api.Provide;
 /**
  * The command line on random mutations of the shipped examples (those that size in about a second) and of the
  * templates: {@code coilwise size} never ends in an unhandled exception or an internal fault; it exits 0, 2 or 3,
- * always with something to read, and on bad input (2) it writes nothing. The Monte Carlo and the simulation run with
+ * always with something to read, and on bad input (2) it writes nothing. The same for {@code check} and
+ * {@code simulate} on mutated spring files, and for {@code report} on mutated saved shortlists. The Monte Carlo and the simulation run with
  * their smallest settings to keep each try short; {@link CliMutationFuzz} runs many more tries.
  */
 class CliMutationProperties {
@@ -50,6 +51,84 @@ class CliMutationProperties {
         check(yaml);
     }
 
+    /** The lightest custom design coilwise finds for the tool-carrier example: it meets every limit (exit 0). */
+    static final String SPRING = """
+            material: chrome-silicon
+            ends: closed-ground
+            wire_diameter: 3.55 mm
+            mean_diameter: 20.2 mm
+            active_coils: 10.5
+            free_length: 78.1 mm
+            """;
+
+    @Provide
+    Arbitrary<String> springMutants() {
+        return TextMutations.yaml(List.of(SPRING, SPRING.replace("mean_diameter: 20.2 mm", "outer_diameter: 0.935 in")
+                .replace("active_coils: 10.5", "total_coils: 12.5")));
+    }
+
+    @Provide
+    Arbitrary<String> shortlistMutants() {
+        return TextMutations.yaml(SavedShortlists.texts());
+    }
+
+    @Property(tries = 20, edgeCases = EdgeCasesMode.NONE)
+    void checkAndSimulateExitZeroTwoOrThreeWithAMessage(@ForAll("springMutants") String spring) throws IOException {
+        checkSpring(spring);
+    }
+
+    @Property(tries = 20, edgeCases = EdgeCasesMode.NONE)
+    void reportExitsZeroTwoOrThreeWithAMessage(@ForAll("shortlistMutants") String json) throws IOException {
+        checkReport(json);
+    }
+
+    /** check and simulate on a spring file, against the tool-carrier example; returns check's exit code. */
+    static int checkSpring(String spring) throws IOException {
+        Path dir = Files.createTempDirectory("coilwise-spring");
+        try {
+            Path file = Files.writeString(dir.resolve("spring.yaml"), spring);
+            Path req = Path.of("requirements", FAST_EXAMPLES.get(0));
+            CliRunner check = CliRunner.run("check", req.toString(), "--spring", file.toString());
+            expectHandled(check);
+            CliRunner sim = CliRunner.run("simulate", req.toString(), "--spring", file.toString(), "--masses", "2",
+                    "--out", dir.resolve("out").toString());
+            expectHandled(sim);
+            return check.code();
+        } finally {
+            delete(dir);
+        }
+    }
+
+    /** report on a saved shortlist; returns the exit code. */
+    static int checkReport(String json) throws IOException {
+        Path dir = Files.createTempDirectory("coilwise-report");
+        try {
+            Path file = Files.writeString(dir.resolve("shortlist.json"), json);
+            CliRunner r = CliRunner.run("report", file.toString());
+            expectHandled(r);
+            if (r.code() == 2) {
+                assertThat(dir.resolve("report.html")).doesNotExist();
+            }
+            return r.code();
+        } finally {
+            delete(dir);
+        }
+    }
+
+    private static void expectHandled(CliRunner r) {
+        assertThat(r.code()).as("exit code; stderr: %s", r.err()).isIn(0, 2, 3);
+        assertThat(r.err()).doesNotContain("internal fault").doesNotContain("\tat ");
+        assertThat(r.code() == 2 ? r.err() : r.out()).isNotBlank();
+    }
+
+    private static void delete(Path dir) throws IOException {
+        try (Stream<Path> all = Files.walk(dir)) {
+            for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(p);
+            }
+        }
+    }
+
     /** Runs size on the text; returns the exit code after checking it and what was printed and written. */
     static int check(String yaml) throws IOException {
         Path dir = Files.createTempDirectory("coilwise-mutant");
@@ -72,11 +151,7 @@ class CliMutationProperties {
             }
             return r.code();
         } finally {
-            try (Stream<Path> all = Files.walk(dir)) {
-                for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
-                    Files.deleteIfExists(p);
-                }
-            }
+            delete(dir);
         }
     }
 }
