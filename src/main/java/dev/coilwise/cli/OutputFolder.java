@@ -181,10 +181,8 @@ final class OutputFolder {
 
     /** Temporary files are created owner-only; outputs are ordinary files (rw-r--r--) like any a user writes. */
     private static void readableByAll(Path p) throws IOException {
-        try {
+        if (p.getFileSystem().supportedFileAttributeViews().contains("posix")) {
             Files.setPosixFilePermissions(p, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
-        } catch (UnsupportedOperationException e) {
-            // not a POSIX file system: the default permissions stand
         }
     }
 

@@ -45,14 +45,20 @@ public final class MonteCarlo {
     public static List<ScatterSummary> summarise(List<Spring> designs, Requirement req, ToleranceSource source,
                                                  ScatterSettings settings, ScatterProgress progress) {
         long total = (long) designs.size() * settings.samples();
-        List<ScatterSummary> out = new ArrayList<>(designs.size());
-        long offset = 0;
-        for (Spring s : designs) {
+        java.util.concurrent.atomic.AtomicLong done = new java.util.concurrent.atomic.AtomicLong();
+        // Designs are independent and each has its own seeded generator, so sampling them in parallel gives the same
+        // result as in sequence; progress is summed over the designs as they go.
+        return java.util.stream.IntStream.range(0, designs.size()).parallel().mapToObj(i -> {
+            Spring s = designs.get(i);
             HalfWidths h = source.halfWidths(s, req.spring().toleranceGrade());
-            out.add(sample(s, req, h, settings, progress, offset, total).summary());
-            offset += settings.samples();
-        }
-        return out;
+            long[] seen = {0};
+            ScatterProgress mine = (d, t) -> {
+                long step = d - seen[0];
+                seen[0] = d;
+                progress.advanced(done.addAndGet(step), total);
+            };
+            return sample(s, req, h, settings, mine, 0, settings.samples()).summary();
+        }).toList();
     }
 
     private static ScatterSamples sample(Spring nominal, Requirement req, HalfWidths halfWidths,
