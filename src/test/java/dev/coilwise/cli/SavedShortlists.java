@@ -16,7 +16,7 @@ final class SavedShortlists {
         if (texts == null) {
             try {
                 Path dir = Files.createTempDirectory("coilwise-saved");
-                String feasible = saved(dir, Path.of("requirements", CliMutationProperties.FAST_EXAMPLES.get(0)), "a");
+                String feasible = saved(dir, Path.of("requirements", CliMutationPropertiesTest.TOOL_CARRIER), "a");
                 Path impossible = Files.writeString(dir.resolve("impossible.yaml"), "title: no spring can\njob: arrest\n"
                         + "load:\n  mass: 6 kg\nmotion:\n  speed: 2 m/s\nlimits:\n  stroke: 30 mm\n  peak_force: 300 N\n");
                 texts = List.of(feasible, saved(dir, impossible, "b"));

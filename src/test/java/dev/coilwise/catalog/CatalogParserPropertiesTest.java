@@ -19,9 +19,9 @@ import net.jqwik.api.Provide;
 /**
  * Random mutations of catalogues in our format and of a supplier export read through its mapping: the reader either
  * returns parts or refuses the file with bad input whose every line is printable, strict and lenient alike; a lenient
- * read never fails on a row. {@link CatalogParserFuzz} runs the same checks with many more tries.
+ * read never fails on a row. {@link CatalogParserFuzzTest} runs the same checks with many more tries.
  */
-class CatalogParserProperties {
+class CatalogParserPropertiesTest {
     static final MaterialTable TABLE = MaterialTable.loadDefault();
     private static final CatalogReader STRICT = new CatalogReader(TABLE);
     private static final CatalogReader LENIENT = new CatalogReader(TABLE, true);

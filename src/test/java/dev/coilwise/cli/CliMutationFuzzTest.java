@@ -12,22 +12,22 @@ import net.jqwik.api.Tag;
 import net.jqwik.api.lifecycle.AfterContainer;
 
 /**
- * The fuzz run of the command line: {@link CliMutationProperties}'s check on many more mutants. Tagged {@code fuzz};
- * run it with {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=CliMutationFuzz} (docs/reliability.md). Prints
+ * The fuzz run of the command line: {@link CliMutationPropertiesTest}'s check on many more mutants. Tagged {@code fuzz};
+ * run it with {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=CliMutationFuzzTest} (docs/reliability.md). Prints
  * how many inputs it tried and their exit codes.
  */
 @Tag("fuzz")
-class CliMutationFuzz {
+class CliMutationFuzzTest {
     private static final Map<Integer, Integer> CODES = new TreeMap<>();
 
     @Provide
     Arbitrary<String> mutants() {
-        return dev.coilwise.testing.TextMutations.yaml(CliMutationProperties.bases());
+        return dev.coilwise.testing.TextMutations.yaml(CliMutationPropertiesTest.bases());
     }
 
     @Property(tries = 1500, edgeCases = EdgeCasesMode.NONE)
     void sizeExitsZeroTwoOrThreeWithAMessage(@ForAll("mutants") String yaml) throws IOException {
-        CODES.merge(CliMutationProperties.check(yaml), 1, Integer::sum);
+        CODES.merge(CliMutationPropertiesTest.check(yaml), 1, Integer::sum);
     }
 
     private static final Map<Integer, Integer> CHECK = new TreeMap<>();
@@ -35,22 +35,22 @@ class CliMutationFuzz {
 
     @Provide
     Arbitrary<String> springMutants() {
-        return new CliMutationProperties().springMutants();
+        return new CliMutationPropertiesTest().springMutants();
     }
 
     @Provide
     Arbitrary<String> shortlistMutants() {
-        return new CliMutationProperties().shortlistMutants();
+        return new CliMutationPropertiesTest().shortlistMutants();
     }
 
     @Property(tries = 1000, edgeCases = EdgeCasesMode.NONE)
     void checkAndSimulateExitZeroTwoOrThreeWithAMessage(@ForAll("springMutants") String spring) throws IOException {
-        CHECK.merge(CliMutationProperties.checkSpring(spring), 1, Integer::sum);
+        CHECK.merge(CliMutationPropertiesTest.checkSpring(spring), 1, Integer::sum);
     }
 
     @Property(tries = 2000, edgeCases = EdgeCasesMode.NONE)
     void reportExitsZeroTwoOrThreeWithAMessage(@ForAll("shortlistMutants") String json) throws IOException {
-        REPORT.merge(CliMutationProperties.checkReport(json), 1, Integer::sum);
+        REPORT.merge(CliMutationPropertiesTest.checkReport(json), 1, Integer::sum);
     }
 
     @AfterContainer

@@ -13,21 +13,21 @@ import net.jqwik.api.Tag;
 import net.jqwik.api.lifecycle.AfterContainer;
 
 /**
- * The fuzz run of the requirement reader and schema: the checks of {@link RequirementParserProperties} on many more
+ * The fuzz run of the requirement reader and schema: the checks of {@link RequirementParserPropertiesTest} on many more
  * mutants. Tagged {@code fuzz}, so left out of the normal build; run it with
- * {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=RequirementParserFuzz} (docs/reliability.md). Prints how many
+ * {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=RequirementParserFuzzTest} (docs/reliability.md). Prints how many
  * inputs it tried and what became of them.
  */
 @Tag("fuzz")
-class RequirementParserFuzz {
+class RequirementParserFuzzTest {
     /** Tries per property. */
     static final int TRIES = 25_000;
-    private static final Map<RequirementParserProperties.Outcome, AtomicLong> READ = counts();
-    private static final Map<RequirementParserProperties.Outcome, AtomicLong> AGREED = counts();
+    private static final Map<RequirementParserPropertiesTest.Outcome, AtomicLong> READ = counts();
+    private static final Map<RequirementParserPropertiesTest.Outcome, AtomicLong> AGREED = counts();
 
-    private static Map<RequirementParserProperties.Outcome, AtomicLong> counts() {
-        Map<RequirementParserProperties.Outcome, AtomicLong> m = new EnumMap<>(RequirementParserProperties.Outcome.class);
-        for (RequirementParserProperties.Outcome o : RequirementParserProperties.Outcome.values()) {
+    private static Map<RequirementParserPropertiesTest.Outcome, AtomicLong> counts() {
+        Map<RequirementParserPropertiesTest.Outcome, AtomicLong> m = new EnumMap<>(RequirementParserPropertiesTest.Outcome.class);
+        for (RequirementParserPropertiesTest.Outcome o : RequirementParserPropertiesTest.Outcome.values()) {
             m.put(o, new AtomicLong());
         }
         return m;
@@ -35,17 +35,17 @@ class RequirementParserFuzz {
 
     @Provide
     Arbitrary<String> mutants() {
-        return TextMutations.yaml(RequirementParserProperties.bases());
+        return TextMutations.yaml(RequirementParserPropertiesTest.bases());
     }
 
     @Property(tries = TRIES, edgeCases = EdgeCasesMode.NONE)
     void theReaderOnlyEverReportsProblems(@ForAll("mutants") String yaml) {
-        READ.get(RequirementParserProperties.readsOrReports(yaml)).incrementAndGet();
+        READ.get(RequirementParserPropertiesTest.readsOrReports(yaml)).incrementAndGet();
     }
 
     @Property(tries = TRIES, edgeCases = EdgeCasesMode.NONE)
     void theSchemaNeverRefusesWhatTheReaderAccepts(@ForAll("mutants") String yaml) {
-        AGREED.get(RequirementParserProperties.schemaAgreesWithReader(yaml)).incrementAndGet();
+        AGREED.get(RequirementParserPropertiesTest.schemaAgreesWithReader(yaml)).incrementAndGet();
     }
 
     @AfterContainer

@@ -20,10 +20,10 @@ import net.jqwik.api.Provide;
 /**
  * Random mutations of the shipped examples and templates: the reader never fails with anything but a list of
  * problems, every problem prints on one line, and the schema never refuses what the reader accepts (nor reports a
- * mistake at a key where the reader finds none). A modest number of tries here; {@link RequirementParserFuzz} runs
+ * mistake at a key where the reader finds none). A modest number of tries here; {@link RequirementParserFuzzTest} runs
  * the same checks with many more.
  */
-class RequirementParserProperties {
+class RequirementParserPropertiesTest {
     static final MaterialTable TABLE = MaterialTable.loadDefault();
     private static final RequirementReader WITH_SCHEMA = new RequirementReader(TABLE);
     private static final RequirementReader WITHOUT_SCHEMA = new RequirementReader(TABLE, false);

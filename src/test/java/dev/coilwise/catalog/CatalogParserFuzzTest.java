@@ -13,19 +13,19 @@ import net.jqwik.api.Tag;
 import net.jqwik.api.lifecycle.AfterContainer;
 
 /**
- * The fuzz run of the catalogue reader: the checks of {@link CatalogParserProperties} on many more mutants. Tagged
- * {@code fuzz}; run it with {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=CatalogParserFuzz}
+ * The fuzz run of the catalogue reader: the checks of {@link CatalogParserPropertiesTest} on many more mutants. Tagged
+ * {@code fuzz}; run it with {@code mvn test -Dtest.excludedGroups=benchmark -Dtest=CatalogParserFuzzTest}
  * (docs/reliability.md). Prints how many inputs it tried and what became of them.
  */
 @Tag("fuzz")
-class CatalogParserFuzz {
+class CatalogParserFuzzTest {
     static final int TRIES = 20_000;
-    private static final Map<CatalogParserProperties.Outcome, AtomicLong> NATIVE = counts();
-    private static final Map<CatalogParserProperties.Outcome, AtomicLong> EXPORT = counts();
+    private static final Map<CatalogParserPropertiesTest.Outcome, AtomicLong> NATIVE = counts();
+    private static final Map<CatalogParserPropertiesTest.Outcome, AtomicLong> EXPORT = counts();
 
-    private static Map<CatalogParserProperties.Outcome, AtomicLong> counts() {
-        Map<CatalogParserProperties.Outcome, AtomicLong> m = new EnumMap<>(CatalogParserProperties.Outcome.class);
-        for (CatalogParserProperties.Outcome o : CatalogParserProperties.Outcome.values()) {
+    private static Map<CatalogParserPropertiesTest.Outcome, AtomicLong> counts() {
+        Map<CatalogParserPropertiesTest.Outcome, AtomicLong> m = new EnumMap<>(CatalogParserPropertiesTest.Outcome.class);
+        for (CatalogParserPropertiesTest.Outcome o : CatalogParserPropertiesTest.Outcome.values()) {
             m.put(o, new AtomicLong());
         }
         return m;
@@ -33,22 +33,22 @@ class CatalogParserFuzz {
 
     @Provide
     Arbitrary<String> nativeMutants() {
-        return TextMutations.csv(CatalogParserProperties.nativeBases());
+        return TextMutations.csv(CatalogParserPropertiesTest.nativeBases());
     }
 
     @Provide
     Arbitrary<String> exportMutants() {
-        return TextMutations.csv(CatalogParserProperties.exportBases());
+        return TextMutations.csv(CatalogParserPropertiesTest.exportBases());
     }
 
     @Property(tries = TRIES, edgeCases = EdgeCasesMode.NONE)
     void ourFormatIsReadOrRefusedWithAMessage(@ForAll("nativeMutants") String csv) {
-        NATIVE.get(CatalogParserProperties.readsOrRefuses(csv, null)).incrementAndGet();
+        NATIVE.get(CatalogParserPropertiesTest.readsOrRefuses(csv, null)).incrementAndGet();
     }
 
     @Property(tries = TRIES, edgeCases = EdgeCasesMode.NONE)
     void aMappedExportIsReadOrRefusedWithAMessage(@ForAll("exportMutants") String csv) {
-        EXPORT.get(CatalogParserProperties.readsOrRefuses(csv, CatalogParserProperties.EXPORT_MAPPING)).incrementAndGet();
+        EXPORT.get(CatalogParserPropertiesTest.readsOrRefuses(csv, CatalogParserPropertiesTest.EXPORT_MAPPING)).incrementAndGet();
     }
 
     @AfterContainer
