@@ -44,7 +44,7 @@ final class Magnitudes {
             Map.entry("load.mass", new Bound(1e-4, 1e4, "0.1 g", "10 t (22000 lb)", "load mass")),
             Map.entry("load.weight", new Bound(1e-3, 1e5, "0.001 N", "100 kN (22500 lbf)", "load weight")),
             Map.entry("motion.drop_height", length(10, "10 m (32.8 ft)", "drop height")),
-            Map.entry("motion.speed", new Bound(0, 50, "", "50 m/s (164 ft/s)", "contact speed")),
+            Map.entry("motion.speed", new Bound(1e-6, 50, "0.001 mm/s", "50 m/s (164 ft/s)", "contact speed")),
             Map.entry("motion.drive_force", new Bound(0, 1e6, "", "1 MN (225000 lbf)", "drive force")),
             Map.entry("launch.height", length(100, "100 m (328 ft)", "launch height")),
             Map.entry("limits.stroke", length(1, "1 m (39.4 in)", "stroke")),

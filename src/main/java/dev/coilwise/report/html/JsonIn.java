@@ -3,6 +3,7 @@ package dev.coilwise.report.html;
 import com.fasterxml.jackson.databind.JsonNode;
 import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.Message;
+import dev.coilwise.error.SafeText;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -104,9 +105,24 @@ final class JsonIn {
             if (!e.isNumber() && !e.isNull()) {
                 throw BadInputException.of(Message.SAVED_FIELD, at(key) + "[" + i + "]", kind(e), "a number");
             }
-            out[i] = e.isNull() ? Double.NaN : e.asDouble();
+            out[i] = e.isNull() ? Double.NaN : plausible(at(key) + "[" + i + "]", e);
         }
         return out;
+    }
+
+    /**
+     * Largest magnitude of a number in a saved shortlist: 10¹², far past anything coilwise writes (cycles reach 10¹⁰).
+     * A larger one, or one too large for a double, comes from an edited or foreign file and would break the charts.
+     */
+    static final double MAX_MAGNITUDE = 1e12;
+
+    private static double plausible(String where, JsonNode n) {
+        double v = n.asDouble();
+        if (!Double.isFinite(v) || Math.abs(v) > MAX_MAGNITUDE) {
+            throw BadInputException.of(Message.SAVED_FIELD, where, kind(n), "a number no larger than 1e12 in size, as"
+                    + " coilwise writes it");
+        }
+        return v;
     }
 
     String text(String key) {
@@ -127,7 +143,7 @@ final class JsonIn {
         if (n == null || !(n.isNumber() || n.isNull())) {
             throw wrong(key, "a number");
         }
-        return n.isNull() ? Double.NaN : n.asDouble();
+        return n.isNull() ? Double.NaN : plausible(at(key), n);
     }
 
     /** A number that may be absent or null (NaN then). */
@@ -171,10 +187,7 @@ final class JsonIn {
         if (n.isNull()) {
             return "null";
         }
-        String shown = n.isTextual() ? "'" + n.asText() + "'" : n.toString();
-        if (shown.length() > 40) {
-            shown = shown.substring(0, 37) + "...";
-        }
+        String shown = SafeText.quote(n.isTextual() ? "'" + n.asText() + "'" : n.toString(), 40);
         return (n.isObject() ? "an object " : n.isArray() ? "a list " : "") + shown;
     }
 }
