@@ -39,11 +39,12 @@ public final class ShortlistTable {
     public static String write(SizingResult r, DisplayUnits u) {
         StringBuilder sb = new StringBuilder();
         sb.append(summary(r.requirement(), u)).append('\n');
-        sb.append(DisplayUnits.fmt("searched %d families (%d materials, %d end types, %d wire sizes); %d candidates"
+        int mats = r.search().space().materials().size();
+        int ends = r.search().space().ends().size();
+        sb.append(DisplayUnits.fmt("searched %d families (%d material%s, %d end type%s, %d wire sizes); %d candidates"
                         + " evaluated; %d families have a feasible design%n",
-                r.search().space().families().size(), r.search().space().materials().size(),
-                r.search().space().ends().size(), r.search().space().wireDiameters().size(), r.search().evaluated(),
-                r.search().best().size()));
+                r.search().space().families().size(), mats, mats == 1 ? "" : "s", ends, ends == 1 ? "" : "s",
+                r.search().space().wireDiameters().size(), r.search().evaluated(), r.search().best().size()));
         if (r.feasible()) {
             sb.append('\n').append(table(r, u));
         } else {
