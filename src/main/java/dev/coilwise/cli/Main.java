@@ -11,6 +11,7 @@ public final class Main {
     }
 
     public static void main(String[] args) {
+        Warmup.start(args);
         System.exit(run(System.out, System.err, args));
     }
 

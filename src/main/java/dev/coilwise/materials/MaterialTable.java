@@ -40,8 +40,20 @@ public final class MaterialTable {
 
     private final List<String> order;
 
-    /** Loads the table bundled with coilwise. */
+    /**
+     * The table bundled with coilwise, read once per run (it is immutable). Threads that ask while another is reading
+     * it wait for that read rather than repeat it, so a start-up thread may read it ahead of the command.
+     */
     public static MaterialTable loadDefault() {
+        return Bundled.TABLE;
+    }
+
+    /** Holder of the bundled table: the JVM reads it on first use, once, and makes other threads wait for it. */
+    private static final class Bundled {
+        static final MaterialTable TABLE = readBundled();
+    }
+
+    private static MaterialTable readBundled() {
         try (InputStream in = MaterialTable.class.getResourceAsStream(DEFAULT_RESOURCE)) {
             if (in == null) {
                 throw new InternalFaultException("material table resource missing: " + DEFAULT_RESOURCE);

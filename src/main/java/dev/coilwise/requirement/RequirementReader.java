@@ -65,9 +65,6 @@ public final class RequirementReader {
     private Requirement parse(String text, Problems problems, Path base, String defaultTitle) {
         Optional<YamlNode.Mapping> root = YamlTreeReader.read(text, problems, NEEDED);
         problems.throwIfAny();
-        if (schemaCheck) {
-            RequirementSchema.check(root.orElseThrow(), problems);
-        }
         Section top = new Section("", root.orElseThrow(), new YamlNode.Position(1, 1), problems, TOP_KEYS);
         String title = top.has("title") ? top.text("title").orElse(defaultTitle) : defaultTitle;
         if (title.chars().anyMatch(Character::isISOControl)) {
@@ -86,6 +83,12 @@ public final class RequirementReader {
         Optional<SpringOptions> spring = SpringOptionsReader.read(top, materials);
         Optional<Ranking> ranking = RankingReader.read(top);
         List<Path> stock = RankingReader.stock(top, base);
+        // The schema's problems are kept apart from the reader's and merged when thrown, so checking the schema
+        // after the reader's own checks reports exactly the same; it lets a start-up thread compile the schema
+        // (cli.Warmup) while this thread reads the file.
+        if (schemaCheck) {
+            RequirementSchema.check(root.orElseThrow(), problems);
+        }
         problems.throwIfAny();
         Optional<Requirement> requirement = top.build("", () -> new Requirement(title, got(event, "job"),
                 got(limits, "limits"), got(envelope, "envelope"), got(spring, "spring"), got(ranking, "ranking"),

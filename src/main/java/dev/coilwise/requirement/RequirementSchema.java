@@ -44,6 +44,16 @@ public final class RequirementSchema {
         static final JsonSchema SCHEMA = compile(TREE);
     }
 
+    /**
+     * Reads and compiles the schema now rather than on first use; a thread that checks a file meanwhile waits for
+     * this one. Called by a start-up thread so that the compilation overlaps the command's other work.
+     */
+    public static void prepare() {
+        if (Loaded.SCHEMA == null) {
+            throw new InternalFaultException("requirement schema did not compile");
+        }
+    }
+
     /** The schema as bundled, for {@code coilwise schema}. */
     public static String text() {
         return Loaded.TEXT;
