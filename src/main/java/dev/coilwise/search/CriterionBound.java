@@ -20,9 +20,10 @@ import dev.coilwise.model.Requirement;
  *   <li>free length: L0 ≥ Ls + (1 + ξ)·x by the coil-bind rule, with x the massless working deflection (exact for an
  *       arrest without a pocket, a lower bound for a launch since the spring's own mass only adds to it; 0 with a
  *       pocket, where L0 ≥ pocket instead); rises with Na.</li>
- *   <li>peak force: arrest, Fc + √(2kE + n²) with n = |Fc| without a pocket (exact) and max(0, −Fc) with one
- *       (see {@link RateBounds}); launch, (b + √(b² + 2ηkc))/η, the massless cocking force. Both fall as Na rises
- *       (k falls).</li>
+ *   <li>peak force: arrest, Fc + √(2kE + n²) with n = |Fc| without a pocket (exact); with one, n = max(0, −Fc,
+ *       E/s − ks/2), since the preload F0 is at least 0 and, for the load to stop within the stroke s, at least
+ *       E/s + Fc − ks/2 (see {@link PreloadWindow}), and P grows with |F0 − Fc|; 2kE + n² still rises with k. Launch,
+ *       (b + √(b² + 2ηkc))/η, the massless cocking force. Both fall as Na rises (k falls).</li>
  * </ul>
  */
 final class CriterionBound {
@@ -36,6 +37,8 @@ final class CriterionBound {
     private final double pocket;
     private final double push;
     private final double energy;
+    /** The stroke limit, widened by a relative 10⁻⁶ so that the bound stays below designs that meet it to rounding, m. */
+    private final double stroke;
     /** n of the arrest bound: |Fc| without a pocket, max(0, −Fc) with one, N. */
     private final double slack;
     private final double eta;
@@ -55,6 +58,7 @@ final class CriterionBound {
                 ? req.envelope().pocketLength().getAsDouble() : Double.NaN;
         this.push = arrest == null ? 0 : arrest.pushForce();
         this.energy = arrest == null ? 0 : arrest.kineticEnergy();
+        this.stroke = req.limits().stroke() * (1 + 1e-6);
         this.slack = Double.isNaN(pocket) ? Math.abs(push) : Math.max(0, -push);
         this.eta = launch == null ? 1 : launch.efficiency();
         this.lift = launch == null ? 0 : launch.mass() * Gravity.STANDARD * Math.sin(launch.angle());
@@ -145,7 +149,8 @@ final class CriterionBound {
 
     private double peakForce(double k) {
         if (arrest != null) {
-            return push + Math.sqrt(2 * k * energy + slack * slack);
+            double n = Double.isNaN(pocket) ? slack : Math.max(slack, energy / stroke - 0.5 * k * stroke);
+            return push + Math.sqrt(2 * k * energy + n * n);
         }
         return (lift + Math.sqrt(lift * lift + 2 * eta * k * kinetic)) / eta;
     }
