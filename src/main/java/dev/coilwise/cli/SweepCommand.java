@@ -7,7 +7,6 @@ import dev.coilwise.report.SweepCsv;
 import dev.coilwise.requirement.QuantityKind;
 import dev.coilwise.requirement.Quantities;
 import dev.coilwise.requirement.RequirementReader;
-import dev.coilwise.search.Candidate;
 import dev.coilwise.search.DesignSpace;
 import dev.coilwise.search.PrunedSearch;
 import java.io.IOException;
@@ -15,7 +14,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
 import picocli.CommandLine.Command;
@@ -52,26 +50,32 @@ final class SweepCommand extends BaseCommand {
         MaterialTable table = MaterialTable.loadDefault();
         VariedRequirement base = VariedRequirement.of(file, v.key(), new RequirementReader(table));
         List<String> values = v.texts();
-        List<Requirement> reqs = new ArrayList<>();
-        for (int i = 0; i < values.size(); i++) {
-            try {
-                reqs.add(base.with(values.get(i)));
-            } catch (BadInputException e) {
-                throw new BadInputException("--vary step " + (i + 1) + " (" + v.key() + " = " + values.get(i) + "): "
-                        + e.getMessage(), e);
-            }
-        }
-        // Steps are independent: size them on every core; each step's result does not depend on thread timing.
+        Requirement first = step(base, v, values, 0);
+        // Steps are independent: each is read (every value checked as if written in the file) and sized on whichever
+        // core is free; the rows, and the step named when several are bad (the first in step order), do not depend on
+        // thread timing.
         Progress progress = new Progress(err(), terminal);
         AtomicInteger done = new AtomicInteger();
         PrunedSearch search = new PrunedSearch();
-        List<SweepCsv.Row> rows = IntStream.range(0, reqs.size()).parallel().mapToObj(i -> {
-            Optional<Candidate> best = search.best(DesignSpace.of(reqs.get(i), table));
-            progress.update(done.incrementAndGet(), reqs.size());
-            return new SweepCsv.Row(values.get(i), best);
+        List<Outcome> outcomes = IntStream.range(0, values.size()).parallel().mapToObj(i -> {
+            Outcome outcome;
+            try {
+                Requirement req = i == 0 ? first : step(base, v, values, i);
+                outcome = new Outcome(new SweepCsv.Row(values.get(i), search.best(DesignSpace.of(req, table))), null);
+            } catch (BadInputException e) {
+                outcome = new Outcome(null, e);
+            }
+            progress.update(done.incrementAndGet(), values.size());
+            return outcome;
         }).toList();
-        Requirement first = reqs.get(0);
         progress.finish();
+        List<SweepCsv.Row> rows = new ArrayList<>();
+        for (Outcome o : outcomes) {
+            if (o.error() != null) {
+                throw o.error(); // the first bad step in step order
+            }
+            rows.add(o.row());
+        }
         String csv = SweepCsv.write(v.key(), first.isArrest(), first.ranking().by(), rows);
         if (out == null) {
             out().print(csv);
@@ -80,6 +84,20 @@ final class SweepCommand extends BaseCommand {
             err().println("Wrote " + rows.size() + " rows to " + out);
         }
         return rows.stream().anyMatch(r -> r.best().isPresent()) ? ExitCode.OK : ExitCode.NOTHING_FEASIBLE;
+    }
+
+    /** One step: its row, or the bad input that stopped it. */
+    private record Outcome(SweepCsv.Row row, BadInputException error) {
+    }
+
+    /** The requirement of step {@code i} (0-based); a bad value is reported with its step number. */
+    private static Requirement step(VariedRequirement base, Variation v, List<String> values, int i) {
+        try {
+            return base.with(values.get(i));
+        } catch (BadInputException e) {
+            throw new BadInputException("--vary step " + (i + 1) + " (" + v.key() + " = " + values.get(i) + "): "
+                    + e.getMessage(), e);
+        }
     }
 
     /** Writes through {@link OutputFolder}: a temporary file in the same folder moved over the name, never over the input. */
