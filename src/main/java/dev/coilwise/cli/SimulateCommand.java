@@ -10,8 +10,8 @@ import dev.coilwise.mechanics.DesignEvaluator;
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.model.Requirement;
 import dev.coilwise.model.Spring;
+import dev.coilwise.report.Caution;
 import dev.coilwise.report.DisplayUnits;
-import dev.coilwise.report.SafetyNotice;
 import dev.coilwise.report.TimeHistoryChart;
 import dev.coilwise.report.TimeHistoryCsvWriter;
 import dev.coilwise.requirement.RequirementReader;
@@ -132,7 +132,7 @@ final class SimulateCommand extends BaseCommand {
         sb.append(DisplayUnits.fmt("%n  largest deviation from the balance: %.1f %%%n", sim.deviationPct()));
         sim.flags().forEach(f -> sb.append("  WARNING: ").append(f).append('\n'));
         sim.notes().forEach(n -> sb.append("  note: ").append(n).append('\n'));
-        sb.append('\n').append(SafetyNotice.LINE).append('\n');
+        sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
     }
 

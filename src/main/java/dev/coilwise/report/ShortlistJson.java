@@ -46,7 +46,7 @@ public final class ShortlistJson {
         ObjectNode root = Json.MAPPER.createObjectNode();
         root.put("format", "coilwise-shortlist");
         root.put("format_version", FORMAT);
-        root.put("caution", SafetyNotice.LINE);
+        root.put("caution", Caution.TEXT);
         root.set("requirement", requirement(r.requirement()));
         root.set("search", search(r.search()));
         ArrayNode designs = root.putArray("designs");

@@ -104,7 +104,7 @@ public final class ShortlistTable {
             sb.append("\nNotes:\n");
             r.warnings().forEach(w -> sb.append("  - ").append(w).append('\n'));
         }
-        sb.append('\n').append(SafetyNotice.LINE).append('\n');
+        sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
     }
 

@@ -1,7 +1,7 @@
 package dev.coilwise.report.html;
 
 import dev.coilwise.error.InternalFaultException;
-import dev.coilwise.report.SafetyNotice;
+import dev.coilwise.report.Caution;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -34,7 +34,7 @@ public final class HtmlReportWriter {
         h.open("header", "id=\"top\"");
         h.el("p", "class=\"kicker\"", "coilwise spring sizing report, " + (r.arrest() ? "arrest" : "launch"));
         h.el("h1", title);
-        h.raw("<p class=\"caution\" role=\"note\" id=\"caution\">").text(SafetyNotice.LINE).raw("</p>\n");
+        h.raw("<p class=\"caution\" role=\"note\" id=\"caution\">").text(Caution.TEXT).raw("</p>\n");
         h.el("p", "class=\"verdict\"", verdict(r));
         h.close("header");
         h.open("main");
@@ -54,7 +54,7 @@ public final class HtmlReportWriter {
         search(h, r);
         h.close("main");
         h.open("footer");
-        h.raw("<p class=\"caution small\">").text(SafetyNotice.LINE).raw("</p>\n");
+        h.raw("<p class=\"caution small\">").text(Caution.TEXT).raw("</p>\n");
         h.el("p", "Made by " + version() + " from the saved shortlist; re-render it with"
                 + " 'coilwise report shortlist.json'.");
         h.close("footer");
