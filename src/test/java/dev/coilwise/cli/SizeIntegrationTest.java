@@ -59,6 +59,29 @@ class SizeIntegrationTest {
     }
 
     @Test
+    void aShorterShortlistIntoTheSameFolderRemovesTheSheetsOfTheEarlierRunAndKeepsTheUsersFiles(@TempDir Path out)
+            throws IOException {
+        CliRunner first = CliRunner.run("size", EXAMPLE.toString(), "--out", out.toString(), "--samples", "0",
+                "--masses", "0", "--top", "11");
+        assertThat(first.code()).as(first.err()).isZero();
+        assertThat(out.resolve("spec-11.pdf")).exists();
+        Files.writeString(out.resolve("my-notes.txt"), "the designer's own file");
+        // rank 1 of this example is a stock part, which gets no sheet: the second run writes none at all
+        CliRunner second = CliRunner.run("size", EXAMPLE.toString(), "--out", out.toString(), "--samples", "0",
+                "--masses", "0", "--top", "1");
+        assertThat(second.code()).as(second.err()).isZero();
+        try (java.util.stream.Stream<Path> files = Files.list(out)) {
+            assertThat(files.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("shortlist.json",
+                    "shortlist.csv", "report.html", "my-notes.txt");
+        }
+        String removed = String.join(", ", java.util.stream.IntStream.rangeClosed(2, 11)
+                .mapToObj(n -> "spec-" + n + ".html, spec-" + n + ".pdf").toList());
+        assertThat(second.out()).contains("Removed " + removed + " from " + out + ": specification sheets of an"
+                + " earlier run");
+        assertThat(json(out).path("designs")).hasSize(1);
+    }
+
+    @Test
     void scatterAndSimulationAppearInJsonCsvAndTableAndAreReproducible(@TempDir Path dir) throws IOException {
         Path a = dir.resolve("a");
         Path b = dir.resolve("b");
