@@ -371,6 +371,21 @@ public final class ShortlistJson {
             Json.put(o, "stroke_needed_mm", c.strokeNeeded() * 1e3);
             o.put("advice", LimitConflictWords.describe(c, req, u));
         }
+        StrengthBoundWords.shown(d, req).ifPresent(b -> {
+            ObjectNode o = n.putObject("strength");
+            Json.put(o, "least_force_N", b.leastForce());
+            o.put("preloaded", b.preloaded());
+            Json.put(o, "capacity_N", b.capacity());
+            o.put("strong_enough", !b.beyondCapacity());
+            o.put("strongest_material", b.strongest().material().key());
+            o.put("strongest_ends", b.strongest().ends().key());
+            Json.put(o, "strongest_wire_diameter_mm", b.strongest().wireDiameter() * 1e3);
+            Json.put(o, "strongest_outer_diameter_mm", (b.meanDiameter() + b.strongest().wireDiameter()) * 1e3);
+            Json.put(o, "stroke_needed_mm", b.strokeNeeded() * 1e3);
+            Json.put(o, "bore_needed_mm", b.boreNeeded() * 1e3);
+            Json.put(o, "stroke_with_preload_mm", b.strokeWithPreload() * 1e3);
+            o.put("advice", StrengthBoundWords.describe(b, req, u));
+        });
         ArrayNode near = n.putArray("nearest_misses");
         for (NearMiss m : d.nearest()) {
             ObjectNode o = near.addObject();
