@@ -152,6 +152,27 @@ class SizeIntegrationTest {
     }
 
     @Test
+    void aUsCustomaryRequirementGetsItsSimulationFlagsInPoundsForceAndFeetPerSecond(@TempDir Path out)
+            throws IOException {
+        String us = "requirements/arrest-us-gate-stop.yaml";
+        CliRunner r = CliRunner.run("size", us, "--out", out.toString(), "--samples", "0", "--top", "2");
+        assertThat(r.code()).as(r.err()).isZero();
+        java.util.List<String> words = new java.util.ArrayList<>();
+        for (JsonNode d : json(out).path("designs")) {
+            d.path("simulation").path("flags").forEach(f -> words.add(f.asText()));
+            d.path("simulation").path("notes").forEach(f -> words.add(f.asText()));
+        }
+        assertThat(words).as("this example's designs deviate from the balance and rebound").isNotEmpty()
+                .anyMatch(w -> w.contains(" lbf")).anyMatch(w -> w.contains(" ft/s"))
+                .noneMatch(w -> w.contains(" N ") || w.contains(" N)") || w.contains(" mm") || w.contains(" m/s"));
+        org.jsoup.nodes.Document page = org.jsoup.Jsoup.parse(Files.readString(out.resolve("report.html")));
+        assertThat(page.select("section.design li").eachText()).anyMatch(t -> t.startsWith("Simulation warning:")
+                && t.contains(" lbf"));
+        CliRunner sim = CliRunner.run("simulate", us);
+        assertThat(sim.out()).contains("WARNING: simulated peak force").contains(" lbf differs").doesNotContain(" N ");
+    }
+
+    @Test
     void simulateRefusesARankOutsideTheShortlist() {
         CliRunner r = CliRunner.run("simulate", "requirements/launch-vertical-ball.yaml", "--design", "99");
         assertThat(r.code()).isEqualTo(2);
