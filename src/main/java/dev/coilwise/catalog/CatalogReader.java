@@ -5,8 +5,8 @@ import dev.coilwise.error.BadInputException;
 import dev.coilwise.error.Message;
 import dev.coilwise.error.SafeText;
 import dev.coilwise.materials.MaterialTable;
-import dev.coilwise.model.EndType;
 import dev.coilwise.requirement.InputFiles;
+import dev.coilwise.requirement.Suggest;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.StringReader;
@@ -17,6 +17,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.TreeMap;
 import java.util.stream.Collectors;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
@@ -168,21 +169,20 @@ public final class CatalogReader {
             ColumnSource src = e.getValue();
             if (!src.isConstant() && !header.contains(src.column())) {
                 issues.add(new CatalogIssue(Severity.ERROR, name, line, src.column(), "the mapping reads "
-                        + e.getKey().key() + " from this column but the header has no such column; header: "
-                        + String.join(", ", header)));
+                        + e.getKey().key() + " from this column but the header has no such column"
+                        + Suggest.hint(src.column(), header) + "; header: " + String.join(", ", header)));
             }
         }
-        for (String key : m.materialNames().values()) {
-            if (!materials.contains(key)) {
-                issues.add(new CatalogIssue(Severity.ERROR, name, 0, "", "material_names maps to "
-                        + Message.UNKNOWN_MATERIAL.format(key, String.join(", ", materials.keys()))));
+        for (Map.Entry<String, String> e : new TreeMap<>(m.materialNames()).entrySet()) {
+            if (!materials.contains(e.getValue())) {
+                issues.add(new CatalogIssue(Severity.ERROR, name, 0, "", "material_names." + e.getKey() + " maps to "
+                        + Choices.unknownMaterial(e.getValue(), materials.keys())));
             }
         }
-        for (String key : m.endNames().values()) {
-            try {
-                EndType.fromKey(key);
-            } catch (BadInputException ex) {
-                issues.add(new CatalogIssue(Severity.ERROR, name, 0, "", "end_names maps to " + ex.getMessage()));
+        for (Map.Entry<String, String> e : new TreeMap<>(m.endNames()).entrySet()) {
+            if (!Choices.endKeys().contains(e.getValue())) {
+                issues.add(new CatalogIssue(Severity.ERROR, name, 0, "", "end_names." + e.getKey() + " maps to "
+                        + Choices.unknown("end type", e.getValue(), Choices.endKeys())));
             }
         }
         return m;

@@ -10,6 +10,7 @@ import dev.coilwise.requirement.InputFiles;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
@@ -85,7 +86,7 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
         for (Iterator<String> it = root.fieldNames(); it.hasNext(); ) {
             String k = it.next();
             if (!TOP_KEYS.contains(k)) {
-                problems.add(Message.UNKNOWN_KEY.format("mapping key", k, String.join(", ", TOP_KEYS.stream().sorted().toList())));
+                problems.add(Choices.unknown("mapping key", k, TOP_KEYS.stream().sorted().toList()));
             }
         }
         char delimiter = oneChar(root, "delimiter", ',', problems);
@@ -116,7 +117,10 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
         }
         for (String k : units.keySet()) {
             if (CatalogField.byKey(k) == null && !isKind(k)) {
-                problems.add(Message.UNKNOWN_KEY.format("units entry", k, "length, rate, force or a field: " + CatalogField.keys()));
+                List<String> allowed = Choices.both(KINDS, Arrays.stream(CatalogField.values())
+                        .filter(CatalogField::dimensioned).map(CatalogField::key).toList());
+                problems.add(Choices.unknown("units entry", k, allowed, String.join(", ", KINDS)
+                        + " or a field with a unit: " + String.join(", ", allowed.subList(KINDS.size(), allowed.size()))));
             }
         }
         problems.addAll(missing(fields));
@@ -143,8 +147,11 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
         return problems;
     }
 
+    /** The kinds of quantity a {@code units} entry may name instead of a field. */
+    private static final List<String> KINDS = List.of("length", "rate", "force");
+
     private static boolean isKind(String k) {
-        return k.equals("length") || k.equals("rate") || k.equals("force");
+        return KINDS.contains(k);
     }
 
     private static CatalogUnit unitFor(CatalogField f, Map<String, String> units, List<String> problems) {
@@ -160,7 +167,7 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
         }
         CatalogUnit u = CatalogUnit.bySymbol(symbol, f.kind());
         if (u == null) {
-            problems.add(Message.UNKNOWN_KEY.format("unit of " + f.key(), symbol, String.join(", ", allowed)));
+            problems.add(Choices.unknown("unit of " + f.key(), symbol, allowed));
         }
         return u;
     }
@@ -168,7 +175,8 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
     private static CatalogField field(String key, String section, List<String> problems) {
         CatalogField f = CatalogField.byKey(key);
         if (f == null) {
-            problems.add(Message.UNKNOWN_KEY.format("field in " + section, key, CatalogField.keys()));
+            problems.add(Choices.unknown("field in " + section, key,
+                    Arrays.stream(CatalogField.values()).map(CatalogField::key).toList()));
         }
         return f;
     }

@@ -1,5 +1,7 @@
 package dev.coilwise.catalog;
 
+import dev.coilwise.requirement.Suggest;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -46,20 +48,28 @@ final class NativeHeader {
                     }
                 }
                 if (!matched) {
+                    List<String> suffixes = CatalogUnit.of(f.kind()).stream().map(CatalogUnit::suffix).toList();
                     issues.add(new CatalogIssue(CatalogIssue.Severity.ERROR, file, line, name,
-                            "unknown unit suffix '" + suffix + "'; write one of: " + f.headerChoices()));
+                            "unknown unit suffix '" + suffix + "'" + Suggest.hint(suffix, suffixes) + "; write one of: "
+                                    + f.headerChoices()));
                     matched = true;
                 }
             }
             if (!matched) {
                 issues.add(new CatalogIssue(CatalogIssue.Severity.WARNING, file, line, name,
-                        "column is not part of the catalogue format and is ignored; known fields: " + CatalogField.keys()));
+                        "column is not part of the catalogue format and is ignored" + Suggest.hint(h, headerNames())
+                                + "; known fields: " + CatalogField.keys()));
             }
         }
         for (String problem : ColumnMapping.missing(fields)) {
             issues.add(new CatalogIssue(CatalogIssue.Severity.ERROR, file, line, "", problem));
         }
         return new ColumnMapping(',', '.', fields, Map.of(), Map.of());
+    }
+
+    /** Every header name of our format: the plain keys and the keys with each unit suffix. */
+    static List<String> headerNames() {
+        return Arrays.stream(CatalogField.values()).flatMap(f -> Arrays.stream(f.headerChoices().split(", "))).toList();
     }
 
     private static void put(Map<CatalogField, ColumnSource> fields, CatalogField f, ColumnSource src, String file,

@@ -10,6 +10,7 @@ import dev.coilwise.model.Spring;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
@@ -94,17 +95,26 @@ final class RowReader {
             return OptionalDouble.of(src.unit() == null ? x : src.unit().toSi(x));
         }
 
-        <T> T key(CatalogField f, Function<String, T> lookup) {
+        /**
+         * A key cell: one of the file's own names that the mapping translates ({@code names}), or one of our
+         * {@code keys}; anything else is a row error naming the nearest allowed word.
+         */
+        <T> T key(CatalogField f, Map<String, String> names, List<String> keys, Function<String, T> lookup) {
             String v = text(f);
             if (v == null) {
                 return null;
             }
-            try {
-                return lookup.apply(v);
-            } catch (BadInputException e) {
-                issue(Severity.ERROR, f, e.getMessage());
+            String key = names.getOrDefault(v, v);
+            if (!keys.contains(key)) {
+                List<String> allowed = Choices.both(new java.util.TreeSet<>(names.keySet()), keys);
+                String section = f == CatalogField.MATERIAL ? "material_names" : "end_names";
+                issue(Severity.ERROR, f, f == CatalogField.MATERIAL && names.isEmpty()
+                        ? Choices.unknownMaterial(v, keys)
+                        : Choices.unknown(f == CatalogField.MATERIAL ? "material" : "end type", v, allowed,
+                                Choices.namesOrKeys(section, names.keySet(), keys)));
                 return null;
             }
+            return lookup.apply(key);
         }
     }
 
@@ -126,8 +136,8 @@ final class RowReader {
         Row row = new Row(record, line, issues);
         String part = row.text(CatalogField.PART_NUMBER);
         String supplier = row.text(CatalogField.SUPPLIER);
-        Material mat = row.key(CatalogField.MATERIAL, v -> materials.get(mapping.materialNames().getOrDefault(v, v)));
-        EndType ends = row.key(CatalogField.ENDS, v -> EndType.fromKey(mapping.endNames().getOrDefault(v, v)));
+        Material mat = row.key(CatalogField.MATERIAL, mapping.materialNames(), materials.keys(), materials::get);
+        EndType ends = row.key(CatalogField.ENDS, mapping.endNames(), Choices.endKeys(), EndType::fromKey);
         OptionalDouble d = row.number(CatalogField.WIRE_DIAMETER);
         OptionalDouble od = row.number(CatalogField.OUTER_DIAMETER);
         OptionalDouble l0 = row.number(CatalogField.FREE_LENGTH);

@@ -1,5 +1,6 @@
 package dev.coilwise.cli;
 
+import dev.coilwise.report.Caution;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.Properties;
@@ -12,8 +13,7 @@ import picocli.CommandLine.Spec;
 /** The top command: lists the subcommands; run bare, prints its usage. */
 @Command(name = "coilwise", mixinStandardHelpOptions = true, versionProvider = CoilwiseCommand.Version.class,
         header = "Sizes helical compression springs that arrest a moving load or launch a payload.",
-        description = {"Springs store energy, and launched payloads and failing buffers can hurt people. Results are"
-            + " a design aid: confirm them by test; local codes, standards and licensed engineering practice govern."},
+        description = Caution.TEXT,
         subcommands = {SizeCommand.class, CheckCommand.class, SimulateCommand.class, ReportCommand.class,
             SweepCommand.class, MaterialsCommand.class, NewCommand.class, SchemaCommand.class,
             CommandLine.HelpCommand.class},

@@ -16,6 +16,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
 
 /**
  * Writes a set of output files as one step, or not at all.
@@ -26,6 +28,11 @@ import java.util.Optional;
  * to disk; moves the files they replace aside; and moves the new files into place. If any step fails, the files
  * already moved are taken back out and the old ones restored, so the folder is left as it was, and the failure is
  * reported as bad input (exit 2) naming the folder and the reason.
+ *
+ * <p>A command whose set of files varies from run to run (a spec sheet per design) names the pattern of its own
+ * variable file names with {@link #replacing(Pattern)}: plain files in the folder whose names match it and that this
+ * run does not write are left over from an earlier run, and are removed in the same step (moved aside with the
+ * replaced files, put back if the step fails). Files of any other name, links, folders and inputs are never touched.
  */
 final class OutputFolder {
     /** Moves a file over another; a seam for the tests that make a move fail half-way. */
@@ -37,6 +44,8 @@ final class OutputFolder {
     private final List<Path> inputs;
     private final Mover mover;
     private final Map<String, byte[]> files = new LinkedHashMap<>();
+    private Optional<Pattern> own = Optional.empty();
+    private final List<String> removed = new ArrayList<>();
 
     OutputFolder(Path dir, List<Path> inputs) {
         this(dir, inputs, OutputFolder::move);
@@ -59,9 +68,21 @@ final class OutputFolder {
         files.put(name, bytes.clone());
     }
 
+    /** Names matching {@code pattern} that this run does not write are removed on {@link #commit()}. */
+    OutputFolder replacing(Pattern pattern) {
+        own = Optional.of(pattern);
+        return this;
+    }
+
+    /** Names of the files of an earlier run that the last {@link #commit()} removed, sorted. */
+    List<String> removed() {
+        return List.copyOf(removed);
+    }
+
     /** Writes every file; returns the paths written, in the order added. */
     List<Path> commit() {
         check();
+        List<Path> stale = stale();
         try {
             Files.createDirectories(dir);
         } catch (IOException e) {
@@ -80,12 +101,13 @@ final class OutputFolder {
             for (String name : files.keySet()) {
                 Path target = dir.resolve(name);
                 if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
-                    Path aside = Files.createTempFile(dir, "." + name + ".", ".old");
-                    mover.move(target, aside);
-                    asides.put(target, aside);
+                    moveAside(target, asides);
                 }
                 mover.move(staged.get(name), target);
                 placed.add(target);
+            }
+            for (Path old : stale) {
+                moveAside(old, asides);
             }
         } catch (IOException | RuntimeException e) {
             rollBack(placed, asides);
@@ -96,7 +118,39 @@ final class OutputFolder {
             }
         }
         asides.values().forEach(OutputFolder::deleteQuietly);
+        removed.clear();
+        stale.forEach(p -> removed.add(p.getFileName().toString()));
         return List.copyOf(placed);
+    }
+
+    /** Moves {@code target} to a hidden temporary name beside it and records where; leaves no stray file on failure. */
+    private void moveAside(Path target, Map<Path, Path> asides) throws IOException {
+        Path aside = Files.createTempFile(dir, "." + target.getFileName() + ".", ".old");
+        try {
+            mover.move(target, aside);
+        } catch (IOException | RuntimeException e) {
+            deleteQuietly(aside);
+            throw e;
+        }
+        asides.put(target, aside);
+    }
+
+    /** Plain files named like this command's own outputs that this run does not write; never an input. */
+    private List<Path> stale() {
+        if (own.isEmpty() || !Files.isDirectory(dir)) {
+            return List.of();
+        }
+        List<Path> in = inputs.stream().map(OutputFolder::canonical).toList();
+        try (Stream<Path> entries = Files.list(dir)) {
+            return entries.filter(p -> own.get().matcher(p.getFileName().toString()).matches())
+                    .filter(p -> !files.containsKey(p.getFileName().toString()))
+                    .filter(p -> Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS))
+                    .filter(p -> !in.contains(canonical(p)) && !isSameFileAsAnInput(p))
+                    .sorted()
+                    .toList();
+        } catch (IOException e) {
+            throw failed("cannot list the folder", e);
+        }
     }
 
     /** Refuses outputs that are folders or inputs, before anything is written. */

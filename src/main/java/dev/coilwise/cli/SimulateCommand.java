@@ -1,5 +1,6 @@
 package dev.coilwise.cli;
 
+import dev.coilwise.dynamics.DynamicsFlags;
 import dev.coilwise.dynamics.SimulationOptions;
 import dev.coilwise.dynamics.SimulationResult;
 import dev.coilwise.dynamics.SimulationSummary;
@@ -10,8 +11,8 @@ import dev.coilwise.mechanics.DesignEvaluator;
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.model.Requirement;
 import dev.coilwise.model.Spring;
+import dev.coilwise.report.Caution;
 import dev.coilwise.report.DisplayUnits;
-import dev.coilwise.report.SafetyNotice;
 import dev.coilwise.report.TimeHistoryChart;
 import dev.coilwise.report.TimeHistoryCsvWriter;
 import dev.coilwise.requirement.RequirementReader;
@@ -93,7 +94,7 @@ final class SimulateCommand extends BaseCommand {
                 .withHistory(out != null);
         SimulationResult r = Simulator.simulate(spring, req, balance, opt);
         DisplayUnits u = new DisplayUnits(req.units());
-        out().print(describe(label, spring, balance, r.summary(), u));
+        out().print(describe(label, spring, balance, r.summary(), req, u));
         if (out != null) {
             OutputFolder folder = new OutputFolder(out, which != null && which.spring != null
                     ? List.of(file, which.spring) : List.of(file));
@@ -105,7 +106,8 @@ final class SimulateCommand extends BaseCommand {
         return ExitCode.OK;
     }
 
-    static String describe(String label, Spring s, Evaluation e, SimulationSummary sim, DisplayUnits u) {
+    static String describe(String label, Spring s, Evaluation e, SimulationSummary sim, Requirement req,
+                           DisplayUnits u) {
         StringBuilder sb = new StringBuilder();
         boolean arrest = "arrest".equals(e.job());
         sb.append(label).append(": ").append(s.material().key()).append(' ').append(s.ends().key()).append(", d ")
@@ -130,9 +132,10 @@ final class SimulateCommand extends BaseCommand {
         row(sb, "coils clashed", "-", sim.coilClash() ? DisplayUnits.fmt("yes, %.2f ms, element %d",
                 sim.firstClashTime() * 1e3, sim.firstClashElement()) : "no");
         sb.append(DisplayUnits.fmt("%n  largest deviation from the balance: %.1f %%%n", sim.deviationPct()));
-        sim.flags().forEach(f -> sb.append("  WARNING: ").append(f).append('\n'));
-        sim.notes().forEach(n -> sb.append("  note: ").append(n).append('\n'));
-        sb.append('\n').append(SafetyNotice.LINE).append('\n');
+        DynamicsFlags.warnings(sim, e, req.job(), u.system()).forEach(f -> sb.append("  WARNING: ").append(f)
+                .append('\n'));
+        DynamicsFlags.notes(sim, req.job(), u.system()).forEach(n -> sb.append("  note: ").append(n).append('\n'));
+        sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
     }
 

@@ -30,8 +30,11 @@ import java.io.IOException;
 import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -42,8 +45,13 @@ import picocli.CommandLine.Parameters;
             + " catalogues), checks the shortlist against manufacturing scatter and with a time-domain simulation,"
             + " and prints it.",
             "With --out DIR, writes shortlist.csv, shortlist.json, report.html (one self-contained page with charts)"
-            + " and, for each custom design, a specification sheet (spec-N.pdf and spec-N.html) to DIR."})
+            + " and, for each custom design, a specification sheet (spec-N.pdf and spec-N.html) to DIR. Sheets an"
+            + " earlier run left in DIR for designs not in this shortlist are removed, so that DIR holds this run"
+            + " only; no other file in DIR is touched."})
 final class SizeCommand extends BaseCommand {
+    /** Names of the specification sheets, the outputs whose number varies from run to run. */
+    static final Pattern SPEC_SHEET = Pattern.compile("spec-([1-9][0-9]{0,8})\\.(pdf|html)");
+
     enum Format { table, csv, json }
 
     enum Units { si, us }
@@ -127,13 +135,16 @@ final class SizeCommand extends BaseCommand {
         String json = files || format == Format.json ? ShortlistJson.write(result) : null;
         String csv = files || format == Format.csv ? ShortlistCsv.write(result) : null;
         List<String> written = new ArrayList<>();
+        List<String> removed = new ArrayList<>();
         if (files) {
-            OutputFolder folder = new OutputFolder(out, inputs(req));
+            OutputFolder folder = new OutputFolder(out, inputs(req)).replacing(SPEC_SHEET);
             folder.add("shortlist.json", json);
             folder.add("shortlist.csv", csv);
             folder.add("report.html", HtmlReportWriter.write(ReportData.parse(json)));
             addSpecSheets(folder, result);
             folder.commit().forEach(p -> written.add(p.getFileName().toString()));
+            removed.addAll(folder.removed());
+            removed.sort(Comparator.comparingInt(SizeCommand::sheetRank).thenComparing(Comparator.naturalOrder()));
         }
         switch (format) {
             case csv -> out().print(csv);
@@ -148,7 +159,18 @@ final class SizeCommand extends BaseCommand {
                 }
             }
         }
+        if (!removed.isEmpty()) {
+            (format == Format.table ? out() : err()).println("Removed " + String.join(", ", removed) + " from " + out
+                    + ": specification " + (removed.size() == 1 ? "sheet" : "sheets") + " of an earlier run, for"
+                    + " designs not in this shortlist");
+        }
         return result.feasible() ? ExitCode.OK : ExitCode.NOTHING_FEASIBLE;
+    }
+
+    /** The rank in a specification sheet's name. */
+    private static int sheetRank(String name) {
+        Matcher m = SPEC_SHEET.matcher(name);
+        return m.matches() ? Integer.parseInt(m.group(1)) : Integer.MAX_VALUE;
     }
 
     private List<Path> inputs(Requirement req) {

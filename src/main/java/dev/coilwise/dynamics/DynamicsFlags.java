@@ -4,6 +4,7 @@ import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.model.Arrest;
 import dev.coilwise.model.Job;
 import dev.coilwise.model.Launch;
+import dev.coilwise.model.UnitSystem;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -15,6 +16,11 @@ import java.util.Locale;
  * <p>Warnings: simulated stress above the allowable; coil clash; a figure more than {@value #DEVIATION_LIMIT_PCT} %
  * from the balance; a load or payload lighter than the spring's active coils; a payload that does not leave the
  * guide; an event that did not end in the simulated time. Notes: the rebound of an arrested load.
+ *
+ * <p>The summary keeps its figures in SI and its flags in SI words (mm, N, MPa, kg, m/s). Outputs word them in the
+ * requirement's units with {@link #warnings(SimulationSummary, Evaluation, Job, UnitSystem)} and
+ * {@link #notes(SimulationSummary, Job, UnitSystem)}: the same flags, figures in in, lbf, kpsi, lb and ft/s for US
+ * customary units (exact factors, NIST SP 811, 2008 ed., Appendix B).
  */
 public final class DynamicsFlags {
     /** Largest accepted difference between simulation and energy balance, %: 5 (coilwise's choice). */
@@ -42,13 +48,34 @@ public final class DynamicsFlags {
         }
     }
 
-    private static List<Comparison> comparisons(SimulationSummary s, Evaluation e, Job job) {
-        if (job instanceof Arrest) {
-            return List.of(new Comparison("maximum compression", s.maxCompression(), e.workingDeflection(), 1e3, "mm"),
-                    new Comparison("peak force", s.peakForce(), e.peakForce(), 1, "N"));
+    /** Display scale (SI value × scale) and symbol of lengths, forces, stresses, masses and speeds. */
+    private record Shown(UnitSystem units) {
+        static final double INCH = 0.0254, POUND_FORCE = 4.4482216152605, POUND = 0.45359237, FOOT = 0.3048,
+                KPSI = 1e3 * POUND_FORCE / (INCH * INCH);
+
+        boolean us() {
+            return units == UnitSystem.US;
         }
-        return List.of(new Comparison("exit speed", s.exitSpeed(), e.speed(), 1, "m/s"),
-                new Comparison("apex", s.apex(), e.predictedHeight(), 1e3, "mm"));
+
+        double length(double m) {
+            return us() ? m / INCH : m * 1e3;
+        }
+
+        String lengthUnit() {
+            return us() ? "in" : "mm";
+        }
+    }
+
+    private static List<Comparison> comparisons(SimulationSummary s, Evaluation e, Job job, Shown u) {
+        if (job instanceof Arrest) {
+            return List.of(new Comparison("maximum compression", s.maxCompression(), e.workingDeflection(),
+                            u.length(1), u.lengthUnit()),
+                    new Comparison("peak force", s.peakForce(), e.peakForce(), u.us() ? 1 / Shown.POUND_FORCE : 1,
+                            u.us() ? "lbf" : "N"));
+        }
+        return List.of(new Comparison("exit speed", s.exitSpeed(), e.speed(), u.us() ? 1 / Shown.FOOT : 1,
+                        u.us() ? "ft/s" : "m/s"),
+                new Comparison("apex", s.apex(), e.predictedHeight(), u.length(1), u.lengthUnit()));
     }
 
     /**
@@ -57,7 +84,7 @@ public final class DynamicsFlags {
      */
     public static double deviationPct(SimulationSummary s, Evaluation e, Job job) {
         double worst = 0;
-        for (Comparison c : comparisons(s, e, job)) {
+        for (Comparison c : comparisons(s, e, job, new Shown(UnitSystem.SI))) {
             double r = c.relative();
             if (Double.isNaN(r)) {
                 return Double.NaN;
@@ -75,28 +102,37 @@ public final class DynamicsFlags {
         return d.withFlags(warnings(d, e, job), notes(d, job));
     }
 
-    /** The warnings, each a sentence that says what happened. */
+    /** The warnings, each a sentence that says what happened, with figures in SI units. */
     public static List<String> warnings(SimulationSummary s, Evaluation e, Job job) {
+        return warnings(s, e, job, UnitSystem.SI);
+    }
+
+    /** The warnings, each a sentence that says what happened, with figures in {@code units}. */
+    public static List<String> warnings(SimulationSummary s, Evaluation e, Job job, UnitSystem units) {
+        Shown u = new Shown(units);
         List<String> w = new ArrayList<>();
         boolean arrest = job instanceof Arrest;
         if (Double.isNaN(arrest ? s.reboundSpeed() : s.exitSpeed())) {
             w.add("the simulated event did not end within the simulated time; its figures are incomplete");
         }
         if (job instanceof Launch l && s.exitSpeed() == 0) {
-            w.add(fmt("the payload does not leave the guide: it comes to rest %.1f mm below the muzzle",
-                    -s.apex() / Math.sin(l.angle()) * 1e3));
+            w.add(fmt(u.us() ? "the payload does not leave the guide: it comes to rest %.3f in below the muzzle"
+                    : "the payload does not leave the guide: it comes to rest %.1f mm below the muzzle",
+                    u.length(-s.apex() / Math.sin(l.angle()))));
         }
         if (s.peakStress() > e.allowableStress()) {
-            w.add(fmt("simulated peak stress %.0f MPa exceeds the allowable %.0f MPa (the energy balance gives "
-                            + "%.0f MPa): the coils' own inertia raises the stress", s.peakStress() / 1e6,
-                    e.allowableStress() / 1e6, e.stressAtWorking() / 1e6));
+            double scale = u.us() ? 1 / Shown.KPSI : 1e-6;
+            w.add(fmt("simulated peak stress %.0f %s exceeds the allowable %.0f %s (the energy balance gives "
+                            + "%.0f %s): the coils' own inertia raises the stress", s.peakStress() * scale,
+                    u.us() ? "kpsi" : "MPa", e.allowableStress() * scale, u.us() ? "kpsi" : "MPa",
+                    e.stressAtWorking() * scale, u.us() ? "kpsi" : "MPa"));
         }
         if (s.coilClash()) {
             w.add(fmt("coils clash: element %d of %d (counted from the fixed base) closes to its share of the solid "
                             + "length %.2f ms into the event", s.firstClashElement(), s.masses() + 1,
                     s.firstClashTime() * 1e3));
         }
-        for (Comparison c : comparisons(s, e, job)) {
+        for (Comparison c : comparisons(s, e, job, u)) {
             double r = c.relative();
             if (r > DEVIATION_LIMIT_PCT / 100) {
                 w.add(fmt("simulated %s %.4g %s differs from the energy balance (%.4g %s) by %.1f %%", c.name(),
@@ -106,22 +142,31 @@ public final class DynamicsFlags {
         }
         double ma = e.spring().activeMass();
         if (job.mass() < LIGHT_LOAD_RATIO * ma) {
-            w.add(fmt("the %s (%.4g kg) is lighter than the spring's active coils (%.4g kg): the energy balance "
+            double scale = u.us() ? 1 / Shown.POUND : 1;
+            String unit = u.us() ? "lb" : "kg";
+            w.add(fmt("the %s (%.4g %s) is lighter than the spring's active coils (%.4g %s): the energy balance "
                     + "does not hold for so light a %s; rely on the simulated figures and on test",
-                    arrest ? "load" : "payload", job.mass(), ma, arrest ? "load" : "payload"));
+                    arrest ? "load" : "payload", job.mass() * scale, unit, ma * scale, unit, arrest ? "load" : "payload"));
         }
         return w;
     }
 
-    /** Notes that are no fault of the design. */
+    /** Notes that are no fault of the design, with figures in SI units. */
     public static List<String> notes(SimulationSummary s, Job job) {
+        return notes(s, job, UnitSystem.SI);
+    }
+
+    /** Notes that are no fault of the design, with figures in {@code units}. */
+    public static List<String> notes(SimulationSummary s, Job job, UnitSystem units) {
+        boolean us = new Shown(units).us();
         List<String> n = new ArrayList<>();
         if (job instanceof Arrest a) {
             if (s.reboundSpeed() > 0) {
                 String share = a.contactSpeed() > 0
                         ? fmt(" (%.0f %% of the contact speed)", 100 * s.reboundSpeed() / a.contactSpeed()) : "";
-                n.add(fmt("the load leaves the spring at %.3g m/s%s: a spring returns what it stores; add damping "
-                        + "or a catch if the rebound is unwanted", s.reboundSpeed(), share));
+                n.add(fmt("the load leaves the spring at %.3g %s%s: a spring returns what it stores; add damping "
+                        + "or a catch if the rebound is unwanted", us ? s.reboundSpeed() / Shown.FOOT : s.reboundSpeed(),
+                        us ? "ft/s" : "m/s", share));
             } else if (s.reboundSpeed() == 0) {
                 n.add("the load does not leave the spring: it turns back towards the base before it is clear of it");
             }

@@ -16,6 +16,8 @@ public enum Message {
     WIRE_OUT_OF_MATERIAL_RANGE("wire diameter %.3f mm is outside the range of %s (%.3f to %.3f mm); coilwise does not extrapolate a material fit", 4),
     UNKNOWN_MATERIAL("unknown material '%s'; known materials: %s", 2),
     UNKNOWN_KEY("unknown %s '%s'; allowed: %s", 3),
+    /** As {@link #UNKNOWN_KEY}, with a "did you mean" hint (or an empty string) after the value. */
+    UNKNOWN_CHOICE("unknown %s '%s'%s; allowed: %s", 4),
     INDEX_TOO_LOW("spring index C = D/d must exceed 0.75 for the curvature factor to be defined, got %s", 1),
     SPRING_INDEX_TOO_LOW("spring index C = D/d must exceed 1 (the inner diameter D - d must be positive), got %s", 1),
     WAHL_INDEX_TOO_LOW("spring index C = D/d must exceed 1 for the Wahl factor to be defined, got %s", 1),

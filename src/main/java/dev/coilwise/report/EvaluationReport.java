@@ -67,7 +67,7 @@ public final class EvaluationReport {
         }
         sb.append('\n').append(e.feasible() ? "The spring meets every limit." : "The spring FAILS at least one limit.")
                 .append('\n');
-        sb.append('\n').append(SafetyNotice.LINE).append('\n');
+        sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
     }
 

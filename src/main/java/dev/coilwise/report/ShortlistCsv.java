@@ -36,7 +36,7 @@ public final class ShortlistCsv {
         StringWriter out = new StringWriter();
         CSVFormat fmt = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").setCommentMarker('#').get();
         try (CSVPrinter p = new CSVPrinter(out, fmt)) {
-            p.printComment(SafetyNotice.LINE);
+            p.printComment(Caution.TEXT);
             p.printRecord(header);
             for (ShortlistEntry e : r.shortlist()) {
                 p.printRecord(row(e, arrest, r.requirement().spring().toleranceGrade()));

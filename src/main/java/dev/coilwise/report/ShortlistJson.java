@@ -2,6 +2,7 @@ package dev.coilwise.report;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.coilwise.dynamics.DynamicsFlags;
 import dev.coilwise.dynamics.SimulationSummary;
 import dev.coilwise.dynamics.TimeHistory;
 import dev.coilwise.mechanics.Evaluation;
@@ -46,13 +47,12 @@ public final class ShortlistJson {
         ObjectNode root = Json.MAPPER.createObjectNode();
         root.put("format", "coilwise-shortlist");
         root.put("format_version", FORMAT);
-        root.put("caution", SafetyNotice.LINE);
+        root.put("caution", Caution.TEXT);
         root.set("requirement", requirement(r.requirement()));
         root.set("search", search(r.search()));
         ArrayNode designs = root.putArray("designs");
-        int grade = r.requirement().spring().toleranceGrade();
         for (ShortlistEntry e : r.shortlist()) {
-            designs.add(design(e, grade));
+            designs.add(design(e, r.requirement()));
         }
         root.set("feasible_families", families(r));
         if (r.diagnosis().isPresent()) {
@@ -178,7 +178,8 @@ public final class ShortlistJson {
         return arr;
     }
 
-    static ObjectNode design(ShortlistEntry entry, int grade) {
+    static ObjectNode design(ShortlistEntry entry, Requirement req) {
+        int grade = req.spring().toleranceGrade();
         Evaluation e = entry.evaluation();
         Spring s = e.spring();
         ObjectNode n = Json.MAPPER.createObjectNode();
@@ -264,7 +265,7 @@ public final class ShortlistJson {
             t.put("grade", tp.grade());
         }
         entry.simulation().ifPresent(sim -> {
-            ObjectNode sn = simulation(sim, "arrest".equals(e.job()));
+            ObjectNode sn = simulation(sim, e, req);
             if (!entry.history().isEmpty()) {
                 sn.set("history", history(entry.history()));
             }
@@ -274,7 +275,9 @@ public final class ShortlistJson {
         return n;
     }
 
-    static ObjectNode simulation(SimulationSummary sim, boolean arrest) {
+    /** The simulated figures (SI) and the flags and notes in words, with figures in the requirement's units. */
+    static ObjectNode simulation(SimulationSummary sim, Evaluation balance, Requirement req) {
+        boolean arrest = "arrest".equals(balance.job());
         ObjectNode s = Json.MAPPER.createObjectNode();
         s.put("masses", sim.masses());
         Json.put(s, "max_compression_mm", sim.maxCompression() * 1e3);
@@ -294,9 +297,9 @@ public final class ShortlistJson {
             Json.put(s, "apex_mm", sim.apex() * 1e3);
         }
         ArrayNode flags = s.putArray("flags");
-        sim.flags().forEach(flags::add);
+        DynamicsFlags.warnings(sim, balance, req.job(), req.units()).forEach(flags::add);
         ArrayNode notes = s.putArray("notes");
-        sim.notes().forEach(notes::add);
+        DynamicsFlags.notes(sim, req.job(), req.units()).forEach(notes::add);
         return s;
     }
 
@@ -371,6 +374,21 @@ public final class ShortlistJson {
             Json.put(o, "stroke_needed_mm", c.strokeNeeded() * 1e3);
             o.put("advice", LimitConflictWords.describe(c, req, u));
         }
+        StrengthBoundWords.shown(d, req).ifPresent(b -> {
+            ObjectNode o = n.putObject("strength");
+            Json.put(o, "least_force_N", b.leastForce());
+            o.put("preloaded", b.preloaded());
+            Json.put(o, "capacity_N", b.capacity());
+            o.put("strong_enough", !b.beyondCapacity());
+            o.put("strongest_material", b.strongest().material().key());
+            o.put("strongest_ends", b.strongest().ends().key());
+            Json.put(o, "strongest_wire_diameter_mm", b.strongest().wireDiameter() * 1e3);
+            Json.put(o, "strongest_outer_diameter_mm", (b.meanDiameter() + b.strongest().wireDiameter()) * 1e3);
+            Json.put(o, "stroke_needed_mm", b.strokeNeeded() * 1e3);
+            Json.put(o, "bore_needed_mm", b.boreNeeded() * 1e3);
+            Json.put(o, "stroke_with_preload_mm", b.strokeWithPreload() * 1e3);
+            o.put("advice", StrengthBoundWords.describe(b, req, u));
+        });
         ArrayNode near = n.putArray("nearest_misses");
         for (NearMiss m : d.nearest()) {
             ObjectNode o = near.addObject();

@@ -55,6 +55,10 @@ public final class ShortlistTable {
                     d.conflicts().forEach(c -> sb.append("  ").append(LimitConflictWords.describe(c, r.requirement(), u))
                             .append('\n'));
                 }
+                StrengthBoundWords.shown(d, r.requirement()).ifPresent(b -> sb.append(b.beyondCapacity()
+                        ? "No spring in the design space is strong enough (work-energy balance and wire strength):\n"
+                        : "Work-energy balance:\n").append("  ").append(StrengthBoundWords.describe(b, r.requirement(), u))
+                        .append('\n'));
                 if (r.search().evaluated() == 0) {
                     sb.append("The search's bounds ruled out every candidate before evaluating one; the diagnosis samples"
                             + " the design space instead.\n");
@@ -104,7 +108,7 @@ public final class ShortlistTable {
             sb.append("\nNotes:\n");
             r.warnings().forEach(w -> sb.append("  - ").append(w).append('\n'));
         }
-        sb.append('\n').append(SafetyNotice.LINE).append('\n');
+        sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
     }
 

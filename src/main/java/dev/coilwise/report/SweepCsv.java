@@ -39,7 +39,7 @@ public final class SweepCsv {
         StringWriter out = new StringWriter();
         CSVFormat fmt = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").setCommentMarker('#').get();
         try (CSVPrinter p = new CSVPrinter(out, fmt)) {
-            p.printComment(SafetyNotice.LINE);
+            p.printComment(Caution.TEXT);
             p.printRecord(header);
             for (int i = 0; i < rows.size(); i++) {
                 p.printRecord(row(i + 1, rows.get(i), arrest, by, header.size()));

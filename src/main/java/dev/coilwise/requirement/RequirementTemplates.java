@@ -8,7 +8,8 @@ import java.nio.charset.StandardCharsets;
 
 /**
  * Commented requirement templates, one per job, for a user to copy and fill in. Each lists every key with its
- * meaning and default, carries the safety caution, and parses as it stands (tested).
+ * meaning and default, and parses as it stands (tested). The {@code new} command adds the safety caution, which has
+ * one source for every output ({@code report.Caution}).
  */
 public final class RequirementTemplates {
     static final String ARREST_RESOURCE = "/dev/coilwise/requirement/template-arrest.yaml";

@@ -4,8 +4,11 @@ import java.util.Collection;
 import java.util.Locale;
 import java.util.Optional;
 
-/** Finds the nearest allowed word to a misspelt one, by Levenshtein edit distance, for "did you mean" hints. */
-final class Suggest {
+/**
+ * Finds the nearest allowed word to a misspelt one, by Levenshtein edit distance, for "did you mean" hints. Public
+ * so that the readers of other input files (stock catalogues and their column mappings) give the same hints.
+ */
+public final class Suggest {
     private Suggest() {
     }
 
@@ -13,7 +16,7 @@ final class Suggest {
      * The allowed word nearest to {@code word}, if it is close enough to be a likely misspelling: at most a third of
      * the word's length (and at least 1, at most 3) edits away, ignoring case, '-' versus '_' and surrounding spaces.
      */
-    static Optional<String> nearest(String word, Collection<String> allowed) {
+    public static Optional<String> nearest(String word, Collection<String> allowed) {
         String w = normal(word);
         int limit = Math.max(1, Math.min(3, w.length() / 3));
         String best = null;
@@ -29,7 +32,7 @@ final class Suggest {
     }
 
     /** " (did you mean 'x'?)" or the empty string. */
-    static String hint(String word, Collection<String> allowed) {
+    public static String hint(String word, Collection<String> allowed) {
         return nearest(word, allowed).map(s -> " (did you mean '" + s + "'?)").orElse("");
     }
 

@@ -19,9 +19,10 @@ import java.util.Set;
 import java.util.TreeMap;
 
 /**
- * Explains an empty search. Samples every family on a coarse sub-grid (up to {@value #SAMPLES} mean diameters ×
- * {@value #SAMPLES} coil counts, each at the free length the coil-bind rule asks for, and at the pocket length when
- * there is one), counts which limits fail, and keeps the designs that fail a single limit by the least.
+ * Explains an empty search: the work-energy bounds of {@link LimitConflict} and {@link StrengthBound}; then samples
+ * every family on a coarse sub-grid (up to {@value #SAMPLES} mean diameters × {@value #SAMPLES} coil counts, each at
+ * the free length the coil-bind rule asks for, and at the pocket length when there is one), counts which limits
+ * fail, and keeps the designs that fail a single limit by the least.
  */
 public final class Diagnoser {
     /** Samples per axis of the diagnosis sub-grid. */
@@ -68,7 +69,7 @@ public final class Diagnoser {
                 nearest.add(n);
             }
         }
-        return new Diagnosis(sampled, sorted, nearest, LimitConflict.of(req));
+        return new Diagnosis(sampled, sorted, nearest, LimitConflict.of(req), StrengthBound.of(space));
     }
 
     private static List<Long> spread(long lo, long hi) {

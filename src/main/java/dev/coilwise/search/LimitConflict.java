@@ -73,7 +73,7 @@ public record LimitConflict(String limit, double allowed, double leastNeeded, do
     }
 
     /** Arrest: the stroke at which a peak force {@code f} suffices; NaN when the push leaves no room at any stroke. */
-    private static double arrestStroke(double e, double fc, double f, boolean pocket) {
+    static double arrestStroke(double e, double fc, double f, boolean pocket) {
         double room = pocket ? f - fc : f - 2 * fc;
         return room > 0 ? (pocket ? e : 2 * e) / room : Double.NaN;
     }

@@ -3,6 +3,7 @@ package dev.coilwise.search;
 import dev.coilwise.catalog.StockEvaluation;
 import dev.coilwise.catalog.StockEvaluator;
 import dev.coilwise.catalog.StockPart;
+import dev.coilwise.dynamics.DynamicsFlags;
 import dev.coilwise.dynamics.SimulationOptions;
 import dev.coilwise.dynamics.SimulationResult;
 import dev.coilwise.dynamics.SimulationSummary;
@@ -101,7 +102,8 @@ public final class Sizer {
         for (ShortlistEntry e : ranked) {
             e.evaluation().margins().stream().filter(m -> !m.hard() && !m.holds()).forEach(m -> warnings.add(
                     "design " + e.rank() + ": " + softWarning(m)));
-            e.simulation().ifPresent(s -> s.flags().stream().filter(f -> !f.contains(DEVIATION_FLAG))
+            e.simulation().ifPresent(s -> DynamicsFlags.warnings(s, e.evaluation(), req.job(), req.units()).stream()
+                    .filter(f -> !f.contains(DEVIATION_FLAG))
                     .forEach(f -> warnings.add("design " + e.rank() + " (simulation): " + f)));
         }
         deviationSummary(ranked).ifPresent(warnings::add);
@@ -131,7 +133,8 @@ public final class Sizer {
                     dropped++;
                     Candidate c = batch.get(i).candidate();
                     warnings.add("left the shortlist under ranking.dynamics: strict: " + describe(c) + ": "
-                            + String.join("; ", summary.flags()));
+                            + String.join("; ", DynamicsFlags.warnings(summary, batch.get(i).evaluation(), req.job(),
+                                    req.units())));
                 } else {
                     kept.add(batch.get(i).withSimulation(sims.get(i)));
                 }

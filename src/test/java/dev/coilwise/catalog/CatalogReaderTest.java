@@ -54,6 +54,18 @@ class CatalogReaderTest {
     }
 
     @Test
+    void aMisspeltColumnIsIgnoredWithAWarningThatNamesTheNearestHeader() {
+        StockCatalog c = read(HEADER.replace("\n", ",wire_diamter_mm,Remarks\n")
+                + "P-1,Demo,music-wire,closed-ground,2,22,60,8,,,1.00,2,note\n", false);
+        assertThat(c.parts()).hasSize(1);
+        assertThat(c.warnings()).extracting(CatalogIssue::toString).containsExactly(
+                "test.csv:1: warning: column 'wire_diamter_mm': column is not part of the catalogue format and is"
+                        + " ignored (did you mean 'wire_diameter_mm'?); known fields: " + CatalogField.keys(),
+                "test.csv:1: warning: column 'Remarks': column is not part of the catalogue format and is ignored;"
+                        + " known fields: " + CatalogField.keys());
+    }
+
+    @Test
     void everyRowErrorIsCollectedWithFileLineAndColumnBeforeFailing() {
         String csv = HEADER
                 + "P-1,Demo,unobtainium,closed-ground,2,22,60,8,,,1.00\n"     // line 2: unknown material

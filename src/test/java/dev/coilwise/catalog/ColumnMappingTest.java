@@ -113,6 +113,7 @@ class ColumnMappingTest {
                 """, "m.yaml");
         String csv = "Item,Maker,Grade,Ends,Wire,OD,Length,Coils,Price\nA,B,MW,closed,1,10,30,6,1\n";
         assertThatThrownBy(() -> new CatalogReader(TABLE).read(new java.io.StringReader(csv), "x.csv", m))
-                .hasMessageContaining("material_names maps to unknown material 'music-wyre'; known materials:");
+                .hasMessageContaining("material_names.MW maps to unknown material 'music-wyre' (did you mean 'music-wire'?);"
+                        + " known materials: music-wire,");
     }
 }

@@ -85,9 +85,11 @@ class CliBasicsTest {
         Path out = dir.resolve("out");
         CliRunner r = CliRunner.run("size", req.toString(), "--out", out.toString());
         assertThat(r.code()).isEqualTo(3);
-        assertThat(r.out()).contains("NO FEASIBLE DESIGN");
+        assertThat(r.out()).contains("NO FEASIBLE DESIGN")
+                .contains("No spring in the design space is strong enough (work-energy balance and wire strength)");
         String json = Files.readString(out.resolve("shortlist.json"));
-        assertThat(json).contains("\"designs\" : [ ]").contains("\"diagnosis\"").contains("removed_by");
+        assertThat(json).contains("\"designs\" : [ ]").contains("\"diagnosis\"").contains("removed_by")
+                .contains("\"strong_enough\" : false");
     }
 
     @Test

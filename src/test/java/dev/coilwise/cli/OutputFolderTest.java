@@ -10,6 +10,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -83,6 +84,48 @@ class OutputFolderTest {
         OutputFolder g = new OutputFolder(file, List.of());
         g.add("a.csv", "x");
         assertThatThrownBy(g::commit).hasMessage("--out " + file + " exists and is not a folder; choose a folder");
+    }
+
+    @Test
+    void filesOfAnEarlierRunNamedLikeTheOwnPatternAreRemovedAndNothingElse(@TempDir Path dir) throws IOException {
+        Path out = Files.createDirectories(dir.resolve("out"));
+        for (String name : new String[] {"spec-1.pdf", "spec-2.pdf", "spec-3.pdf", "spec-3.html", "notes.txt",
+            "spec-3.pdf.bak"}) {
+            Files.writeString(out.resolve(name), "old " + name);
+        }
+        Files.createDirectories(out.resolve("spec-4.pdf"));
+        Path input = Files.writeString(out.resolve("spec-5.html"), "an input that happens to match");
+        Path elsewhere = Files.writeString(dir.resolve("target.pdf"), "a file outside the folder");
+        Files.createSymbolicLink(out.resolve("spec-6.pdf"), elsewhere);
+        OutputFolder f = new OutputFolder(out, List.of(input)).replacing(Pattern.compile("spec-[0-9]+\\.(pdf|html)"));
+        f.add("spec-1.pdf", "new 1");
+        assertThat(f.commit()).containsExactly(out.resolve("spec-1.pdf"));
+        assertThat(f.removed()).containsExactly("spec-2.pdf", "spec-3.html", "spec-3.pdf");
+        assertThat(listing(out)).containsExactly("notes.txt", "spec-1.pdf", "spec-3.pdf.bak", "spec-4.pdf",
+                "spec-5.html", "spec-6.pdf");
+        assertThat(Files.readString(out.resolve("spec-1.pdf"))).isEqualTo("new 1");
+        assertThat(Files.readString(elsewhere)).isEqualTo("a file outside the folder");
+    }
+
+    @Test
+    void aFailureAfterRemovingFilesOfAnEarlierRunPutsThemBack(@TempDir Path dir) throws IOException {
+        Path out = Files.createDirectories(dir.resolve("out"));
+        Files.writeString(out.resolve("spec-1.pdf"), "old 1");
+        Files.writeString(out.resolve("spec-2.pdf"), "old 2");
+        Files.writeString(out.resolve("spec-3.pdf"), "old 3");
+        AtomicInteger moves = new AtomicInteger();
+        OutputFolder f = new OutputFolder(out, List.of(), (from, to) -> {
+            if (moves.incrementAndGet() == 4) { // spec-1 aside, spec-1 in, spec-2 aside, then spec-3 aside fails
+                throw new IOException("Input/output error");
+            }
+            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
+        }).replacing(Pattern.compile("spec-[0-9]+\\.pdf"));
+        f.add("spec-1.pdf", "new 1");
+        assertThatThrownBy(f::commit).isInstanceOf(BadInputException.class).hasMessageContaining("left as it was");
+        assertThat(listing(out)).containsExactly("spec-1.pdf", "spec-2.pdf", "spec-3.pdf");
+        assertThat(Files.readString(out.resolve("spec-1.pdf"))).isEqualTo("old 1");
+        assertThat(Files.readString(out.resolve("spec-2.pdf"))).isEqualTo("old 2");
+        assertThat(f.removed()).isEmpty();
     }
 
     @Test

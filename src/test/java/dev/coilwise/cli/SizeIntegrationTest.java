@@ -59,6 +59,29 @@ class SizeIntegrationTest {
     }
 
     @Test
+    void aShorterShortlistIntoTheSameFolderRemovesTheSheetsOfTheEarlierRunAndKeepsTheUsersFiles(@TempDir Path out)
+            throws IOException {
+        CliRunner first = CliRunner.run("size", EXAMPLE.toString(), "--out", out.toString(), "--samples", "0",
+                "--masses", "0", "--top", "11");
+        assertThat(first.code()).as(first.err()).isZero();
+        assertThat(out.resolve("spec-11.pdf")).exists();
+        Files.writeString(out.resolve("my-notes.txt"), "the designer's own file");
+        // rank 1 of this example is a stock part, which gets no sheet: the second run writes none at all
+        CliRunner second = CliRunner.run("size", EXAMPLE.toString(), "--out", out.toString(), "--samples", "0",
+                "--masses", "0", "--top", "1");
+        assertThat(second.code()).as(second.err()).isZero();
+        try (java.util.stream.Stream<Path> files = Files.list(out)) {
+            assertThat(files.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("shortlist.json",
+                    "shortlist.csv", "report.html", "my-notes.txt");
+        }
+        String removed = String.join(", ", java.util.stream.IntStream.rangeClosed(2, 11)
+                .mapToObj(n -> "spec-" + n + ".html, spec-" + n + ".pdf").toList());
+        assertThat(second.out()).contains("Removed " + removed + " from " + out + ": specification sheets of an"
+                + " earlier run");
+        assertThat(json(out).path("designs")).hasSize(1);
+    }
+
+    @Test
     void scatterAndSimulationAppearInJsonCsvAndTableAndAreReproducible(@TempDir Path dir) throws IOException {
         Path a = dir.resolve("a");
         Path b = dir.resolve("b");
@@ -126,6 +149,27 @@ class SizeIntegrationTest {
         assertThat(Files.readAllLines(out.resolve("time-history.csv")).stream().filter(l -> !l.startsWith("#")).count())
                 .isGreaterThan(10);
         assertThat(Files.readString(out.resolve("time-history.svg"))).contains("<svg").contains("Time (ms)");
+    }
+
+    @Test
+    void aUsCustomaryRequirementGetsItsSimulationFlagsInPoundsForceAndFeetPerSecond(@TempDir Path out)
+            throws IOException {
+        String us = "requirements/arrest-us-gate-stop.yaml";
+        CliRunner r = CliRunner.run("size", us, "--out", out.toString(), "--samples", "0", "--top", "2");
+        assertThat(r.code()).as(r.err()).isZero();
+        java.util.List<String> words = new java.util.ArrayList<>();
+        for (JsonNode d : json(out).path("designs")) {
+            d.path("simulation").path("flags").forEach(f -> words.add(f.asText()));
+            d.path("simulation").path("notes").forEach(f -> words.add(f.asText()));
+        }
+        assertThat(words).as("this example's designs deviate from the balance and rebound").isNotEmpty()
+                .anyMatch(w -> w.contains(" lbf")).anyMatch(w -> w.contains(" ft/s"))
+                .noneMatch(w -> w.contains(" N ") || w.contains(" N)") || w.contains(" mm") || w.contains(" m/s"));
+        org.jsoup.nodes.Document page = org.jsoup.Jsoup.parse(Files.readString(out.resolve("report.html")));
+        assertThat(page.select("section.design li").eachText()).anyMatch(t -> t.startsWith("Simulation warning:")
+                && t.contains(" lbf"));
+        CliRunner sim = CliRunner.run("simulate", us);
+        assertThat(sim.out()).contains("WARNING: simulated peak force").contains(" lbf differs").doesNotContain(" N ");
     }
 
     @Test

@@ -38,7 +38,7 @@ class TimeHistoryChartTest {
         List<String> t = texts(d);
         assertThat(t).contains("Time (ms)", "Load position, spring compressed (mm)", "Force between spring and load (N)",
                 "Demo drop");
-        assertThat(String.join(" ", t).replaceAll("\\s+", " ")).contains("confirm the design by test");
+        assertThat(String.join(" ", t).replaceAll("\\s+", " ")).contains(Caution.TEXT);
     }
 
     @Test

@@ -36,7 +36,7 @@ class TimeHistoryCsvWriterTest {
     @Test
     void carriesTheCautionAsAComment() {
         String csv = TimeHistoryCsvWriter.toCsv(HistorySamples.halfCycle(3));
-        assertThat(csv.lines().filter(l -> l.startsWith("#"))).anyMatch(l -> l.contains("confirm the design by test"));
+        assertThat(csv.lines().filter(l -> l.startsWith("#"))).anyMatch(l -> l.equals("# " + Caution.TEXT));
     }
 
     @Test

@@ -29,6 +29,13 @@ final class DiagnosisSection {
             d.conflicts().forEach(c -> h.el("li", c.advice()));
             h.close("ul");
         }
+        d.strength().ifPresent(s -> {
+            h.el("p", s.strongEnough() ? "Work-energy balance:"
+                    : "No spring in the design space is strong enough (work-energy balance and wire strength):");
+            h.open("ul", "class=\"strength\"");
+            h.el("li", s.advice());
+            h.close("ul");
+        });
         boolean byRanking = !d.removedBy().isEmpty() && LimitNames.RANKING_RULES.containsAll(d.removedBy().keySet());
         if (byRanking) {
             h.el("p", "The search found feasible designs, but the ranking rules below removed all " + d.sampled()

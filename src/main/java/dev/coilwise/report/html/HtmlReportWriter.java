@@ -1,7 +1,7 @@
 package dev.coilwise.report.html;
 
 import dev.coilwise.error.InternalFaultException;
-import dev.coilwise.report.SafetyNotice;
+import dev.coilwise.report.Caution;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -13,7 +13,8 @@ import java.util.Properties;
  * Writes {@code report.html}: one self-contained page (inline style, inline script, charts as inline SVG; nothing
  * fetched from anywhere) that restates the requirement, shows the caution, the sortable shortlist, the trade-off
  * across feasible families and one section per design, or the diagnosis when nothing is feasible. The page holds no
- * date or path, so the same shortlist always gives the same page.
+ * date or path, so the same shortlist always gives the same page. The charts' styles are shared classes
+ * ({@link SvgStyles}), which roughly halves the page.
  */
 public final class HtmlReportWriter {
     private static final String RESOURCES = "/dev/coilwise/report/html/";
@@ -22,6 +23,11 @@ public final class HtmlReportWriter {
     }
 
     public static String write(ReportData r) {
+        return SvgStyles.compact(page(r));
+    }
+
+    /** The page with the charts as JFreeSVG draws them, before {@link SvgStyles#compact}. */
+    static String page(ReportData r) {
         Html h = new Html();
         String title = r.title().isBlank() ? "(untitled requirement)" : r.title();
         h.raw("<!DOCTYPE html>\n<html lang=\"en\" data-units=\"" + r.units().name().toLowerCase(Locale.ROOT) + "\">\n");
@@ -34,7 +40,7 @@ public final class HtmlReportWriter {
         h.open("header", "id=\"top\"");
         h.el("p", "class=\"kicker\"", "coilwise spring sizing report, " + (r.arrest() ? "arrest" : "launch"));
         h.el("h1", title);
-        h.raw("<p class=\"caution\" role=\"note\" id=\"caution\">").text(SafetyNotice.LINE).raw("</p>\n");
+        h.raw("<p class=\"caution\" role=\"note\" id=\"caution\">").text(Caution.TEXT).raw("</p>\n");
         h.el("p", "class=\"verdict\"", verdict(r));
         h.close("header");
         h.open("main");
@@ -54,7 +60,7 @@ public final class HtmlReportWriter {
         search(h, r);
         h.close("main");
         h.open("footer");
-        h.raw("<p class=\"caution small\">").text(SafetyNotice.LINE).raw("</p>\n");
+        h.raw("<p class=\"caution small\">").text(Caution.TEXT).raw("</p>\n");
         h.el("p", "Made by " + version() + " from the saved shortlist; re-render it with"
                 + " 'coilwise report shortlist.json'.");
         h.close("footer");

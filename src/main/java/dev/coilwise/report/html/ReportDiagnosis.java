@@ -5,6 +5,8 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
 
 /**
  * Why nothing was feasible, as saved: how many sampled candidates each limit removed, and the nearest misses.
@@ -13,13 +15,24 @@ import java.util.Map;
  * @param removedBy per limit key, how many sampled candidates fail it, highest first
  * @param nearest   designs failing one limit by the least, with what to relax
  * @param conflicts force or deceleration limits that no spring can meet within the stroke (work-energy bound)
+ * @param strength  the force the job needs within the stroke against the strongest spring, when saved
  */
 public record ReportDiagnosis(long sampled, Map<String, Long> removedBy, List<Miss> nearest,
-                              List<Conflict> conflicts) {
+                              List<Conflict> conflicts, Optional<Strength> strength) {
     public ReportDiagnosis {
         removedBy = Collections.unmodifiableMap(new LinkedHashMap<>(removedBy));
         nearest = List.copyOf(nearest);
         conflicts = List.copyOf(conflicts);
+        Objects.requireNonNull(strength);
+    }
+
+    /**
+     * The work-energy balance against the strength of the wire.
+     *
+     * @param strongEnough whether the strongest spring of the design space takes the least force the job needs
+     * @param advice       the figures and what to change, in words (written by coilwise size in the requirement's units)
+     */
+    public record Strength(boolean strongEnough, String advice) {
     }
 
     /**
@@ -64,6 +77,11 @@ public record ReportDiagnosis(long sampled, Map<String, Long> removedBy, List<Mi
         if (d.has("no_spring_can")) {
             d.objects("no_spring_can").forEach(c -> conflicts.add(new Conflict(c.text("limit"), c.text("advice"))));
         }
-        return new ReportDiagnosis((long) d.number("sampled"), removed, misses, conflicts);
+        Optional<Strength> strength = Optional.empty();
+        if (d.has("strength")) {
+            JsonIn s = d.object("strength");
+            strength = Optional.of(new Strength(s.flag("strong_enough"), s.text("advice")));
+        }
+        return new ReportDiagnosis((long) d.number("sampled"), removed, misses, conflicts, strength);
     }
 }

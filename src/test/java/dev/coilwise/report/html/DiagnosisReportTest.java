@@ -69,4 +69,33 @@ class DiagnosisReportTest {
         assertThat(doc.select("#diagnosis ul.conflicts li")).as("the stroke-limited case has its own conflicts")
                 .hasSize(result.diagnosis().orElseThrow().conflicts().size());
     }
+
+    @Test
+    void withoutAForceLimitTheWorkEnergyBoundSaysWhatStrokeOrBoreWouldLeaveRoom() {
+        SizingResult weak = ReportFixtures.sized("arrest-too-weak");
+        assertThat(weak.diagnosis().orElseThrow().strength()).hasValueSatisfying(b -> assertThat(b.beyondCapacity())
+                .isTrue());
+        Document page = Jsoup.parse(HtmlReportWriter.write(ReportData.of(weak)));
+        assertThat(page.select("#diagnosis p").eachText()).contains(
+                "No spring in the design space is strong enough (work-energy balance and wire strength):");
+        assertThat(page.select("#diagnosis ul.strength li").eachText()).singleElement().asString()
+                .startsWith("Stopping the load within limits.stroke 10.0 mm takes a peak force of at least 800 N")
+                .contains("allow limits.stroke at least 11.3 mm (5.62 mm with preload", "envelope.bore at least 21.1 mm");
+    }
+
+    // arrest-force-conflict: E = ½ × 4 × 1.2² = 2.88 J within 25 mm needs 2E/s = 230.4 N, which the springs of its
+    // bore take: its force limit (100 N, in the conflict above) says what is wrong, so the strength line is left out.
+    // arrest-infeasible: within 3 mm it needs 1920 N, more than any spring of its bore takes: shown beside the
+    // conflict, since raising the force limit alone would not do.
+    @Test
+    void withAForceLimitTheBoundIsShownOnlyWhenNoSpringIsStrongEnough() {
+        SizingResult conflict = ReportFixtures.sized("arrest-force-conflict");
+        assertThat(conflict.diagnosis().orElseThrow().strength()).hasValueSatisfying(b -> {
+            assertThat(b.leastForce()).isCloseTo(230.4, org.assertj.core.api.Assertions.within(1e-9));
+            assertThat(b.beyondCapacity()).isFalse();
+        });
+        assertThat(Jsoup.parse(HtmlReportWriter.write(ReportData.of(conflict))).select("#diagnosis ul.strength")).isEmpty();
+        assertThat(doc.select("#diagnosis ul.strength li").eachText()).singleElement().asString()
+                .startsWith("Stopping the load within limits.stroke 3.0 mm takes a peak force of at least 1920 N");
+    }
 }

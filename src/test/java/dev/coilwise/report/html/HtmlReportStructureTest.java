@@ -4,7 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.model.Spring;
-import dev.coilwise.report.SafetyNotice;
+import dev.coilwise.report.Caution;
 import dev.coilwise.search.ShortlistEntry;
 import dev.coilwise.search.SizingResult;
 import java.util.HashSet;
@@ -119,14 +119,14 @@ class HtmlReportStructureTest {
         Document doc = page(name);
         Element caution = doc.getElementById("caution");
         assertThat(caution).isNotNull();
-        assertThat(caution.text()).isEqualTo(SafetyNotice.LINE);
+        assertThat(caution.text()).isEqualTo(Caution.TEXT);
         assertThat(caution.parent().tagName()).isEqualTo("header");
         Element h1 = doc.selectFirst("h1");
         Element asked = doc.getElementById("requirement");
         List<Element> order = doc.getAllElements();
         assertThat(order.indexOf(caution)).as("caution right after the title, before the requirement")
                 .isGreaterThan(order.indexOf(h1)).isLessThan(order.indexOf(asked));
-        assertThat(doc.select("footer .caution").text()).isEqualTo(SafetyNotice.LINE);
+        assertThat(doc.select("footer .caution").text()).isEqualTo(Caution.TEXT);
     }
 
     @ParameterizedTest

@@ -138,6 +138,49 @@ class ReportBrowserTest {
         assertThat(design).as("pixels of the design colour: rank links, chart lines and markers").isGreaterThan(500);
     }
 
+    /**
+     * The compacted page (chart styles as shared classes, whole-canvas clips dropped: {@link SvgStyles}) renders as
+     * the page with the charts as JFreeSVG drew them, over a window tall enough to hold the shortlist, the trade-off
+     * chart and the first designs' charts. The style classes alone give the same pixels; an element drawn without
+     * its (empty) clip is anti-aliased a little differently at a few edge pixels. So: fewer than one pixel in 10 000
+     * may differ, and none by more than 32 of 255 levels in any channel; a missing or moved line, marker or letter
+     * (the lightest, a grid line, is 34 levels off white) fails.
+     */
+    @Test
+    void theCompactedChartsRenderAsDrawn() throws Exception {
+        ReportData data = ReportData.of(ReportFixtures.sized("arrest-small"));
+        Path drawn = Files.writeString(tmp.resolve("drawn.html"), HtmlReportWriter.page(data));
+        Path compact = Files.writeString(tmp.resolve("compact.html"), HtmlReportWriter.write(data));
+        BufferedImage a = shot(drawn, "drawn.png");
+        BufferedImage b = shot(compact, "compact.png");
+        long differing = 0;
+        long inked = 0;
+        int worst = 0;
+        for (int y = 0; y < a.getHeight(); y++) {
+            for (int x = 0; x < a.getWidth(); x++) {
+                int p = a.getRGB(x, y);
+                int q = b.getRGB(x, y);
+                inked += (p & 0xFFFFFF) == 0xFFFFFF ? 0 : 1;
+                int d = 0;
+                for (int shift = 0; shift < 24; shift += 8) {
+                    d = Math.max(d, Math.abs(((p >> shift) & 0xFF) - ((q >> shift) & 0xFF)));
+                }
+                differing += d > 0 ? 1 : 0;
+                worst = Math.max(worst, d);
+            }
+        }
+        assertThat(inked).as("pixels drawn in the compared window").isGreaterThan(100_000);
+        assertThat(differing).as("pixels that differ between the drawn and the compacted page")
+                .isLessThan((long) a.getWidth() * a.getHeight() / 10_000);
+        assertThat(worst).as("largest difference of a pixel, levels of 255").isLessThanOrEqualTo(32);
+    }
+
+    private BufferedImage shot(Path page, String name) throws Exception {
+        Path png = tmp.resolve(name);
+        chromium(page, "--screenshot=" + png, "--window-size=" + WIDTH + "," + 3 * HEIGHT, "--hide-scrollbars");
+        return ImageIO.read(png.toFile());
+    }
+
     private static boolean near(int r, int g, int b, int r0, int g0, int b0) {
         return Math.abs(r - r0) < 12 && Math.abs(g - g0) < 12 && Math.abs(b - b0) < 12;
     }
