@@ -48,33 +48,13 @@ public final class DynamicsFlags {
         }
     }
 
-    /** Display scale (SI value × scale) and symbol of lengths, forces, stresses, masses and speeds. */
-    private record Shown(UnitSystem units) {
-        static final double INCH = 0.0254, POUND_FORCE = 4.4482216152605, POUND = 0.45359237, FOOT = 0.3048,
-                KPSI = 1e3 * POUND_FORCE / (INCH * INCH);
-
-        boolean us() {
-            return units == UnitSystem.US;
-        }
-
-        double length(double m) {
-            return us() ? m / INCH : m * 1e3;
-        }
-
-        String lengthUnit() {
-            return us() ? "in" : "mm";
-        }
-    }
-
-    private static List<Comparison> comparisons(SimulationSummary s, Evaluation e, Job job, Shown u) {
+    private static List<Comparison> comparisons(SimulationSummary s, Evaluation e, Job job, ShownUnits u) {
         if (job instanceof Arrest) {
             return List.of(new Comparison("maximum compression", s.maxCompression(), e.workingDeflection(),
                             u.length(1), u.lengthUnit()),
-                    new Comparison("peak force", s.peakForce(), e.peakForce(), u.us() ? 1 / Shown.POUND_FORCE : 1,
-                            u.us() ? "lbf" : "N"));
+                    new Comparison("peak force", s.peakForce(), e.peakForce(), u.force(1), u.forceUnit()));
         }
-        return List.of(new Comparison("exit speed", s.exitSpeed(), e.speed(), u.us() ? 1 / Shown.FOOT : 1,
-                        u.us() ? "ft/s" : "m/s"),
+        return List.of(new Comparison("exit speed", s.exitSpeed(), e.speed(), u.speed(1), u.speedUnit()),
                 new Comparison("apex", s.apex(), e.predictedHeight(), u.length(1), u.lengthUnit()));
     }
 
@@ -84,7 +64,7 @@ public final class DynamicsFlags {
      */
     public static double deviationPct(SimulationSummary s, Evaluation e, Job job) {
         double worst = 0;
-        for (Comparison c : comparisons(s, e, job, new Shown(UnitSystem.SI))) {
+        for (Comparison c : comparisons(s, e, job, new ShownUnits(UnitSystem.SI))) {
             double r = c.relative();
             if (Double.isNaN(r)) {
                 return Double.NaN;
@@ -109,7 +89,7 @@ public final class DynamicsFlags {
 
     /** The warnings, each a sentence that says what happened, with figures in {@code units}. */
     public static List<String> warnings(SimulationSummary s, Evaluation e, Job job, UnitSystem units) {
-        Shown u = new Shown(units);
+        ShownUnits u = new ShownUnits(units);
         List<String> w = new ArrayList<>();
         boolean arrest = job instanceof Arrest;
         if (Double.isNaN(arrest ? s.reboundSpeed() : s.exitSpeed())) {
@@ -121,11 +101,10 @@ public final class DynamicsFlags {
                     u.length(-s.apex() / Math.sin(l.angle()))));
         }
         if (s.peakStress() > e.allowableStress()) {
-            double scale = u.us() ? 1 / Shown.KPSI : 1e-6;
             w.add(fmt("simulated peak stress %.0f %s exceeds the allowable %.0f %s (the energy balance gives "
-                            + "%.0f %s): the coils' own inertia raises the stress", s.peakStress() * scale,
-                    u.us() ? "kpsi" : "MPa", e.allowableStress() * scale, u.us() ? "kpsi" : "MPa",
-                    e.stressAtWorking() * scale, u.us() ? "kpsi" : "MPa"));
+                            + "%.0f %s): the coils' own inertia raises the stress", u.stress(s.peakStress()),
+                    u.stressUnit(), u.stress(e.allowableStress()), u.stressUnit(), u.stress(e.stressAtWorking()),
+                    u.stressUnit()));
         }
         if (s.coilClash()) {
             w.add(fmt("coils clash: element %d of %d (counted from the fixed base) closes to its share of the solid "
@@ -142,11 +121,10 @@ public final class DynamicsFlags {
         }
         double ma = e.spring().activeMass();
         if (job.mass() < LIGHT_LOAD_RATIO * ma) {
-            double scale = u.us() ? 1 / Shown.POUND : 1;
-            String unit = u.us() ? "lb" : "kg";
             w.add(fmt("the %s (%.4g %s) is lighter than the spring's active coils (%.4g %s): the energy balance "
                     + "does not hold for so light a %s; rely on the simulated figures and on test",
-                    arrest ? "load" : "payload", job.mass() * scale, unit, ma * scale, unit, arrest ? "load" : "payload"));
+                    arrest ? "load" : "payload", u.mass(job.mass()), u.massUnit(), u.mass(ma), u.massUnit(),
+                    arrest ? "load" : "payload"));
         }
         return w;
     }
@@ -158,15 +136,14 @@ public final class DynamicsFlags {
 
     /** Notes that are no fault of the design, with figures in {@code units}. */
     public static List<String> notes(SimulationSummary s, Job job, UnitSystem units) {
-        boolean us = new Shown(units).us();
+        ShownUnits u = new ShownUnits(units);
         List<String> n = new ArrayList<>();
         if (job instanceof Arrest a) {
             if (s.reboundSpeed() > 0) {
                 String share = a.contactSpeed() > 0
                         ? fmt(" (%.0f %% of the contact speed)", 100 * s.reboundSpeed() / a.contactSpeed()) : "";
                 n.add(fmt("the load leaves the spring at %.3g %s%s: a spring returns what it stores; add damping "
-                        + "or a catch if the rebound is unwanted", us ? s.reboundSpeed() / Shown.FOOT : s.reboundSpeed(),
-                        us ? "ft/s" : "m/s", share));
+                        + "or a catch if the rebound is unwanted", u.speed(s.reboundSpeed()), u.speedUnit(), share));
             } else if (s.reboundSpeed() == 0) {
                 n.add("the load does not leave the spring: it turns back towards the base before it is clear of it");
             }
