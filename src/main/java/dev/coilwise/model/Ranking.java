@@ -8,7 +8,8 @@ import java.util.OptionalDouble;
  * @param by             the criterion
  * @param shortlist      how many designs to keep (1..100)
  * @param prefer         stock or custom first, or neither
- * @param dynamicsStrict simulation flags become limits instead of warnings
+ * @param dynamicsStrict keep only designs whose simulated figures meet every hard limit (see
+ *                       {@code dynamics.SimulatedLimits}); otherwise the simulation only warns
  * @param minProbability smallest Monte Carlo probability that every limit holds, or empty
  */
 public record Ranking(RankBy by, int shortlist, Prefer prefer, boolean dynamicsStrict, OptionalDouble minProbability) {

@@ -34,7 +34,8 @@ public final class ShortlistTable {
             Map.entry("index", "fall outside spring.index"),
             Map.entry("active_coils", "fall outside spring.active_coils"),
             Map.entry("fatigue", "fall short of spring.fatigue_margin"),
-            Map.entry("min_probability", "fall short of ranking.min_probability under manufacturing scatter"));
+            Map.entry("min_probability", "fall short of ranking.min_probability under manufacturing scatter"),
+            Map.entry("dynamics", "break a limit in the time-domain simulation (ranking.dynamics: strict)"));
 
     public static String write(SizingResult r, DisplayUnits u) {
         StringBuilder sb = new StringBuilder();

@@ -3,7 +3,10 @@ package dev.coilwise.search;
 import dev.coilwise.catalog.StockEvaluation;
 import dev.coilwise.catalog.StockEvaluator;
 import dev.coilwise.catalog.StockPart;
+import dev.coilwise.dynamics.ApexBand;
 import dev.coilwise.dynamics.DynamicsFlags;
+import dev.coilwise.dynamics.LimitBreach;
+import dev.coilwise.dynamics.SimulatedLimits;
 import dev.coilwise.dynamics.SimulationOptions;
 import dev.coilwise.dynamics.SimulationResult;
 import dev.coilwise.dynamics.SimulationSummary;
@@ -13,6 +16,7 @@ import dev.coilwise.mechanics.Margin;
 import dev.coilwise.model.Prefer;
 import dev.coilwise.model.RankBy;
 import dev.coilwise.model.Requirement;
+import dev.coilwise.model.UnitSystem;
 import dev.coilwise.scatter.MonteCarlo;
 import dev.coilwise.scatter.ScatterSettings;
 import dev.coilwise.scatter.ScatterSummary;
@@ -33,7 +37,8 @@ import java.util.Optional;
  * shortlist length, or {@value SizingOptions#POOL} times it when a later step may drop designs — then go through the
  * Monte Carlo ({@code ranking.min_probability} drops designs below it; {@code ranking.by: robustness} re-orders by the
  * probability that every limit holds, ties keeping the search order) and the simulation ({@code ranking.dynamics:
- * strict} drops flagged designs; otherwise flags are warnings). The first shortlist-length designs left are kept.
+ * strict} drops designs whose simulated figures break a hard limit, see {@link SimulatedLimits}; flags are warnings
+ * either way). The first shortlist-length designs left are kept.
  */
 public final class Sizer {
     private final MaterialTable materials;
@@ -93,7 +98,9 @@ public final class Sizer {
         }
         Optional<SimulationOptions> sim = options.simulation().or(() -> strict ? Optional.of(SimulationOptions.defaults())
                 : Optional.empty());
-        List<ShortlistEntry> list = sim.isPresent() ? simulate(entries, req, sim.get(), n, strict, removed, warnings)
+        ScatterSettings band = ss.orElse(ScatterSettings.defaults());
+        Strictness rule = new Strictness(strict, new ApexBand(band.heightShortfall(), band.heightOvershoot()));
+        List<ShortlistEntry> list = sim.isPresent() ? simulate(entries, req, sim.get(), n, rule, removed, warnings)
                 : entries.subList(0, Math.min(n, entries.size()));
         List<ShortlistEntry> ranked = new ArrayList<>();
         for (int i = 0; i < list.size(); i++) {
@@ -115,9 +122,16 @@ public final class Sizer {
         return new SizingResult(req, result, ranked, diagnosis, warnings);
     }
 
-    /** Simulates designs in order; under strict dynamics drops flagged ones until {@code n} are kept. */
+    /** Whether strict dynamics applies, and the launch band it holds the simulated apex to. */
+    private record Strictness(boolean on, ApexBand band) {
+    }
+
+    /**
+     * Simulates designs in order; under strict dynamics drops those whose simulated figures break a hard limit until
+     * {@code n} are kept.
+     */
     private static List<ShortlistEntry> simulate(List<ShortlistEntry> entries, Requirement req, SimulationOptions opt,
-                                                 int n, boolean strict, Map<String, Long> removed,
+                                                 int n, Strictness strict, Map<String, Long> removed,
                                                  List<String> warnings) {
         List<ShortlistEntry> kept = new ArrayList<>();
         int next = 0;
@@ -129,12 +143,13 @@ public final class Sizer {
                     .map(e -> Simulator.simulate(e.evaluation().spring(), req, e.evaluation(), opt)).toList();
             for (int i = 0; i < batch.size(); i++) {
                 SimulationSummary summary = sims.get(i).summary();
-                if (strict && summary.flagged()) {
+                List<LimitBreach> breaches = strict.on()
+                        ? SimulatedLimits.breaches(summary, batch.get(i).evaluation(), req, strict.band()) : List.of();
+                if (!breaches.isEmpty()) {
                     dropped++;
-                    Candidate c = batch.get(i).candidate();
-                    warnings.add("left the shortlist under ranking.dynamics: strict: " + describe(c) + ": "
-                            + String.join("; ", DynamicsFlags.warnings(summary, batch.get(i).evaluation(), req.job(),
-                                    req.units())));
+                    warnings.add("left the shortlist under ranking.dynamics: strict: "
+                            + describe(batch.get(i).candidate(), req.units()) + ": "
+                            + String.join("; ", breaches.stream().map(LimitBreach::words).toList()));
                 } else {
                     kept.add(batch.get(i).withSimulation(sims.get(i)));
                 }
@@ -167,11 +182,19 @@ public final class Sizer {
                         + " force than the quasi-static balance" : "the spring spends energy moving its own coils"));
     }
 
-    private static String describe(Candidate c) {
+    /** One inch, m (exact; NIST SP 811, 2008 ed., Appendix B). */
+    private static final double INCH = 0.0254;
+
+    /** The design in a few words: stock part number, or material, ends, d, D and Na in the requirement's units. */
+    static String describe(Candidate c, UnitSystem units) {
         var s = c.evaluation().spring();
+        String geometry = units == UnitSystem.US
+                ? String.format(java.util.Locale.ROOT, " d %.4f in D %.3f in Na %.2f", s.wireDiameter() / INCH,
+                        s.meanDiameter() / INCH, s.activeCoils())
+                : String.format(java.util.Locale.ROOT, " d %.2f mm D %.1f mm Na %.2f", s.wireDiameter() * 1e3,
+                        s.meanDiameter() * 1e3, s.activeCoils());
         return c.stock().map(p -> "stock part " + p.partNumber()).orElse(s.material().key() + " " + s.ends().key()
-                + String.format(java.util.Locale.ROOT, " d %.2f mm D %.1f mm Na %.2f", s.wireDiameter() * 1e3,
-                        s.meanDiameter() * 1e3, s.activeCoils()));
+                + geometry);
     }
 
     private static List<Candidate> stockCandidates(List<StockPart> stock, Requirement req, int firstOrder) {

@@ -121,23 +121,24 @@ class SizeIntegrationTest {
         }
     }
 
+    // The example is an impact: its designs' simulated peak forces lie more than 5 % above the energy balance (the
+    // stress wave along the coils, docs/dynamics.md section 4) but far inside its 2 kN limit, so strict keeps them.
     @Test
-    void strictDynamicsDropsFlaggedDesignsAndSaysWhy(@TempDir Path dir) throws IOException {
+    void strictDynamicsKeepsDesignsWhoseSimulatedFiguresMeetTheLimitsThoughTheyDifferFromTheBalance(@TempDir Path dir)
+            throws IOException {
         Path req = dir.resolve("strict.yaml");
         Files.writeString(req, Files.readString(EXAMPLE).replace("shortlist: 10", "shortlist: 3\n  dynamics: strict")
                 .replace("stock: [../spring-catalogs/demo-metric.csv]", ""));
         CliRunner r = CliRunner.run("size", req.toString(), "--format", "json", "--samples", "0");
-        assertThat(r.code()).as(r.err()).isIn(0, 3);
+        assertThat(r.code()).as(r.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(r.out());
+        assertThat(root.path("requirement").path("ranking").path("dynamics").asText()).isEqualTo("strict");
+        assertThat(root.path("designs")).hasSize(3);
         for (JsonNode d : root.path("designs")) {
-            assertThat(d.path("simulation").path("flags")).isEmpty();
+            assertThat(d.path("simulation").path("deviation_pct").asDouble()).isGreaterThan(5);
+            assertThat(d.path("simulation").path("peak_force_N").asDouble()).isLessThanOrEqualTo(2000);
         }
-        boolean anyDropped = root.path("warnings").toString().contains("ranking.dynamics: strict");
-        boolean diagnosed = root.path("diagnosis").path("removed_by").has("dynamics");
-        assertThat(anyDropped || root.path("designs").size() == 3).isTrue();
-        if (root.path("designs").isEmpty()) {
-            assertThat(diagnosed).isTrue();
-        }
+        assertThat(root.path("warnings").toString()).doesNotContain("ranking.dynamics: strict");
     }
 
     @Test

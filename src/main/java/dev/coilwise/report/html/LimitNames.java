@@ -26,7 +26,7 @@ final class LimitNames {
             case "surge" -> "surge";
             case "fatigue" -> "fatigue life";
             case "min_probability" -> "share made within limits (ranking.min_probability)";
-            case "dynamics" -> "simulation warnings (ranking.dynamics: strict)";
+            case "dynamics" -> "simulated figures over a limit (ranking.dynamics: strict)";
             default -> key.replace('_', ' ');
         };
     }
