@@ -59,6 +59,13 @@ final class DiagnosisSection {
             h.raw("<td class=\"num\" data-v=\"" + share + "\">").text(share < 10 ? fmt("%.1f", share) : fmt("%.0f", share)).raw("</td></tr>\n");
         }
         h.close("tbody").close("table");
+        java.util.List<String> left = r.warnings().stream().filter(w -> w.contains("left the shortlist")).toList();
+        if (byRanking && !left.isEmpty()) {
+            h.el("p", "Why they left the shortlist:");
+            h.open("ul", "class=\"left\"");
+            left.forEach(w -> h.el("li", w));
+            h.close("ul");
+        }
         h.el("h3", "Nearest misses");
         if (d.nearest().isEmpty()) {
             h.el("p", byRanking ? "None: the designs were removed by a ranking rule, not by a limit."

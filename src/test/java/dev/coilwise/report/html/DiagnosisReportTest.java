@@ -98,4 +98,19 @@ class DiagnosisReportTest {
         assertThat(doc.select("#diagnosis ul.strength li").eachText()).singleElement().asString()
                 .startsWith("Stopping the load within limits.stroke 3.0 mm takes a peak force of at least 1920 N");
     }
+
+    // Rendering only: the words are the sizer's own (SizerStrictDynamicsTest checks them); here they must reach the page.
+    @Test
+    void designsThatARankingRuleRemovedAreListedWithTheReasonEachLeft() {
+        List<String> why = List.of("left the shortlist under ranking.dynamics: strict: design a: simulated peak force"
+                + " 572.3 N exceeds limits.peak_force 560 N by 2.2 %", "left the shortlist under ranking.dynamics:"
+                + " strict: design b: simulated peak force 607.5 N exceeds limits.peak_force 560 N by 8.5 %");
+        SizingResult removed = new SizingResult(result.requirement(), result.search(), List.of(),
+                java.util.Optional.of(new Diagnosis(2, Map.of("dynamics", 2L), List.of())), why);
+        Document page = Jsoup.parse(HtmlReportWriter.write(ReportData.of(removed)));
+        assertThat(page.select("#diagnosis table.removed tbody tr td").first().text())
+                .isEqualTo("simulated figures over a limit (ranking.dynamics: strict)");
+        assertThat(page.select("#diagnosis ul.left li").eachText()).isEqualTo(why);
+        assertThat(doc.select("#diagnosis ul.left")).as("limits, not ranking rules, emptied the demo case").isEmpty();
+    }
 }
