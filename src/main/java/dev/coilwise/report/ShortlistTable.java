@@ -37,6 +37,9 @@ public final class ShortlistTable {
             Map.entry("min_probability", "fall short of ranking.min_probability under manufacturing scatter"),
             Map.entry("dynamics", "break a limit in the time-domain simulation (ranking.dynamics: strict)"));
 
+    /** Keys of the ranking rules that can empty a shortlist after the search found feasible designs. */
+    private static final java.util.Set<String> RANKING_RULES = java.util.Set.of("min_probability", "dynamics");
+
     public static String write(SizingResult r, DisplayUnits u) {
         StringBuilder sb = new StringBuilder();
         sb.append(summary(r.requirement(), u)).append('\n');
@@ -49,7 +52,11 @@ public final class ShortlistTable {
         if (r.feasible()) {
             sb.append('\n').append(table(r, u));
         } else {
-            sb.append('\n').append("NO FEASIBLE DESIGN: no spring on the grid meets every limit.\n");
+            boolean byRanking = r.diagnosis().map(d -> !d.removedBy().isEmpty()
+                    && RANKING_RULES.containsAll(d.removedBy().keySet())).orElse(false);
+            sb.append('\n').append(byRanking ? "NO FEASIBLE DESIGN: the search found designs that meet every limit,"
+                    + " but the ranking rules removed all the leading ones.\n"
+                    : "NO FEASIBLE DESIGN: no spring on the grid meets every limit.\n");
             r.diagnosis().ifPresent(d -> {
                 if (!d.conflicts().isEmpty()) {
                     sb.append("No spring can meet these limits, whatever its material, size or ends (work-energy balance):\n");
@@ -64,8 +71,13 @@ public final class ShortlistTable {
                     sb.append("The search's bounds ruled out every candidate before evaluating one; the diagnosis samples"
                             + " the design space instead.\n");
                 }
-                sb.append("Limits that removed the sampled candidates (").append(d.sampled()).append(" sampled; a candidate"
-                        + " may fail several):\n");
+                if (byRanking) {
+                    sb.append("Rules that removed the ").append(d.sampled()).append(" leading designs (the notes below"
+                            + " say why each left):\n");
+                } else {
+                    sb.append("Limits that removed the sampled candidates (").append(d.sampled())
+                            .append(" sampled; a candidate may fail several):\n");
+                }
                 for (Map.Entry<String, Long> en : d.removedBy().entrySet()) {
                     sb.append(DisplayUnits.fmt("  %-16s %7d  %s%n", en.getKey(), en.getValue(), LIMIT_WORDS.getOrDefault(
                             en.getKey(), "")));

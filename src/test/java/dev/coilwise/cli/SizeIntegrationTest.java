@@ -141,6 +141,23 @@ class SizeIntegrationTest {
         assertThat(root.path("warnings").toString()).doesNotContain("ranking.dynamics: strict");
     }
 
+    // The US example with its force limit cut to 58 lbf: its designs' balance peak forces lie just below it, their
+    // simulated ones above it (the stress wave of an impact), so strict removes every leading design.
+    @Test
+    void strictDynamicsThatRemovesEveryDesignSaysWhyInTheRequirementsUnits(@TempDir Path dir) throws IOException {
+        Path req = dir.resolve("strict-us.yaml");
+        Files.writeString(req, Files.readString(Path.of("requirements/arrest-us-gate-stop.yaml"))
+                .replace("shortlist: 10", "shortlist: 4\n  dynamics: strict").replace("peak_force: 300 lbf",
+                        "peak_force: 58 lbf"));
+        CliRunner r = CliRunner.run("size", req.toString(), "--samples", "0");
+        assertThat(r.code()).as(r.err()).isEqualTo(3);
+        assertThat(r.out()).contains("NO FEASIBLE DESIGN: the search found designs that meet every limit, but the"
+                + " ranking rules removed all the leading ones.").containsPattern("dynamics +12 +break a limit");
+        java.util.List<String> left = r.out().lines().filter(l -> l.contains("left the shortlist")).toList();
+        assertThat(left).hasSize(12).allMatch(l -> l.matches(".* d 0\\.\\d{4} in D \\d\\.\\d{3} in Na .*: simulated peak"
+                + " force [0-9.]+ lbf exceeds limits\\.peak_force 58 lbf by .*")).noneMatch(l -> l.contains(" mm"));
+    }
+
     @Test
     void simulateWritesATimeHistoryAndAPlot(@TempDir Path out) throws IOException {
         CliRunner r = CliRunner.run("simulate", "requirements/launch-vertical-ball.yaml", "--design", "2", "--out",
