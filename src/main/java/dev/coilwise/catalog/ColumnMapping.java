@@ -123,7 +123,7 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
                         + " or a field with a unit: " + String.join(", ", allowed.subList(KINDS.size(), allowed.size()))));
             }
         }
-        problems.addAll(missing(fields));
+        problems.addAll(missingInMapping(fields, units));
         if (!problems.isEmpty()) {
             throw BadInputException.of(Message.CATALOG_MAPPING_INVALID, source, problems.size(),
                     "  " + String.join("\n  ", problems));
@@ -143,6 +143,33 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
         if (!fields.containsKey(CatalogField.ACTIVE_COILS) && !fields.containsKey(CatalogField.TOTAL_COILS)) {
             problems.add(Message.CATALOG_MISSING_FIELD.format("active_coils or total_coils", "coil count",
                     "active_coils, total_coils"));
+        }
+        return problems;
+    }
+
+    /**
+     * Problems with the required fields of a mapping, worded in the mapping's own keys: where to map each missing
+     * field (under {@code columns}, with a unit under {@code units} when the mapping has none for it, or under
+     * {@code constants}).
+     */
+    static List<String> missingInMapping(Map<CatalogField, ColumnSource> fields, Map<String, String> units) {
+        List<String> problems = new ArrayList<>();
+        for (CatalogField f : CatalogField.values()) {
+            if (f.required() && !fields.containsKey(f)) {
+                String kind = f.dimensioned() ? f.kind().name().toLowerCase(java.util.Locale.ROOT) : "";
+                List<String> symbols = f.dimensioned()
+                        ? CatalogUnit.of(f.kind()).stream().map(CatalogUnit::symbol).toList() : List.of();
+                String unit = f.dimensioned() && !units.containsKey(f.key()) && !units.containsKey(kind)
+                        ? " and its unit under units as '" + kind + ": " + symbols.get(0) + "' (or '" + f.key() + ": "
+                                + symbols.get(0) + "'; units: " + String.join(", ", symbols) + ")"
+                        : "";
+                problems.add(Message.CATALOG_MAPPING_MISSING_FIELD.format(f.key(), f.description(),
+                        "'" + f.key() + ": <the export's column header>'", unit));
+            }
+        }
+        if (!fields.containsKey(CatalogField.ACTIVE_COILS) && !fields.containsKey(CatalogField.TOTAL_COILS)) {
+            problems.add(Message.CATALOG_MAPPING_MISSING_FIELD.format("active_coils or total_coils", "coil count",
+                    "'active_coils: <the export's column header>' or 'total_coils: <...>'", ""));
         }
         return problems;
     }

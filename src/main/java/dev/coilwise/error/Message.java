@@ -73,6 +73,7 @@ public enum Message {
     // Stock catalogues (dev.coilwise.catalog).
     CATALOG_MAPPING_INVALID("%s: the column mapping has %d problem(s):%n%s", 3),
     CATALOG_MISSING_FIELD("no column for %s (%s); expected one of: %s", 3),
+    CATALOG_MAPPING_MISSING_FIELD("no column for %s (%s); map it under columns as %s%s, or give it under constants", 4),
     CATALOG_EMPTY_VALUE("%s is required but the cell is empty", 1),
     CATALOG_BAD_NUMBER("%s must be a number in %s, got '%s'", 3),
     CATALOG_RAGGED_ROW("row has %d fields but the header has %d", 2),

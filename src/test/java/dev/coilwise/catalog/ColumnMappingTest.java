@@ -116,4 +116,26 @@ class ColumnMappingTest {
                 .hasMessageContaining("material_names.MW maps to unknown material 'music-wyre' (did you mean 'music-wire'?);"
                         + " known materials: music-wire,");
     }
+
+    // A mapping is written in our field keys, so a missing field is named by its key and where it goes, not by the
+    // header names of our own CSV format (free_length_mm, ...), which a mapping never uses.
+    @Test
+    void aMissingFieldIsNamedByItsMappingKeyWithWhereToPutItAndItsUnitWhenNoneIsGiven() {
+        String yaml = """
+                columns: {part_number: Item, supplier: Maker, material: Grade, ends: Ends, wire_diameter: Wire,
+                          outer_diameter: OD, unit_price: Price}
+                units: {wire_diameter: mm, outer_diameter: mm}
+                """;
+        assertThatThrownBy(() -> ColumnMapping.parse(yaml, "m.yaml")).isInstanceOf(BadInputException.class)
+                .hasMessageContaining("no column for free_length (free length); map it under columns as 'free_length:"
+                        + " <the export's column header>' and its unit under units as 'length: mm' (or 'free_length:"
+                        + " mm'; units: mm, in, m), or give it under constants")
+                .hasMessageContaining("no column for active_coils or total_coils (coil count); map it under columns as"
+                        + " 'active_coils: <the export's column header>' or 'total_coils: <...>', or give it under"
+                        + " constants")
+                .hasMessageNotContaining("free_length_mm");
+        assertThatThrownBy(() -> ColumnMapping.parse(yaml.replace("outer_diameter: mm}", "outer_diameter: mm, length:"
+                + " in}"), "m.yaml")).hasMessageContaining("map it under columns as 'free_length: <the export's column"
+                + " header>', or give it under constants");
+    }
 }
