@@ -2,6 +2,9 @@ package dev.coilwise.catalog;
 
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
 
 /**
  * Units a catalogue column may be written in. A column of our own format carries its unit as the suffix of its header
@@ -65,6 +68,23 @@ public enum CatalogUnit {
     /** The units of one kind. */
     public static List<CatalogUnit> of(Kind kind) {
         return Arrays.stream(values()).filter(u -> u.kind == kind).toList();
+    }
+
+    /**
+     * Unit names written out in full, or abbreviated with a full stop, that people put where a symbol belongs. They
+     * are not accepted (requirement files do not accept them either: their reader takes symbols only); they only
+     * give the "did you mean" hint, since edit distance alone cannot tie "inches" to "in".
+     */
+    private static final Map<String, CatalogUnit> NAMES = Map.ofEntries(Map.entry("inch", IN), Map.entry("inches", IN),
+            Map.entry("in.", IN), Map.entry("millimetre", MM), Map.entry("millimetres", MM),
+            Map.entry("millimeter", MM), Map.entry("millimeters", MM), Map.entry("metre", M), Map.entry("metres", M),
+            Map.entry("meter", M), Map.entry("meters", M), Map.entry("newton", N), Map.entry("newtons", N),
+            Map.entry("pound-force", LBF), Map.entry("pounds-force", LBF));
+
+    /** The unit of this kind that {@code word} names in full (e.g. "inches" for in), if any. */
+    public static Optional<CatalogUnit> byName(String word, Kind kind) {
+        return Optional.ofNullable(NAMES.get(word.strip().toLowerCase(Locale.ROOT).replace('_', '-')))
+                .filter(u -> u.kind == kind);
     }
 
     /** The unit with this symbol (case-insensitive) and kind, or null. */

@@ -28,6 +28,16 @@ final class Choices {
         return Message.UNKNOWN_CHOICE.format(what, value, Suggest.hint(value, allowed), allowedText);
     }
 
+    /**
+     * "unknown {what} '{value}' (did you mean '…'?); allowed: a, b, c" for a unit: a unit named in full ("inches")
+     * is pointed to its symbol ("in"), anything else gets the nearest symbol by spelling.
+     */
+    static String unknownUnit(String what, String value, CatalogUnit.Kind kind, List<String> allowed) {
+        String hint = CatalogUnit.byName(value, kind).map(u -> " (did you mean '" + u.symbol() + "'?)")
+                .orElse(Suggest.hint(value, allowed));
+        return Message.UNKNOWN_CHOICE.format(what, value, hint, String.join(", ", allowed));
+    }
+
     /** The end-type keys, in the model's order. */
     static List<String> endKeys() {
         return Arrays.stream(EndType.values()).map(EndType::key).toList();

@@ -194,7 +194,7 @@ public record ColumnMapping(char delimiter, char decimalSeparator, Map<CatalogFi
         }
         CatalogUnit u = CatalogUnit.bySymbol(symbol, f.kind());
         if (u == null) {
-            problems.add(Choices.unknown("unit of " + f.key(), symbol, allowed));
+            problems.add(Choices.unknownUnit("unit of " + f.key(), symbol, f.kind(), allowed));
         }
         return u;
     }

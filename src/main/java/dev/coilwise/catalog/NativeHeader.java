@@ -50,7 +50,9 @@ final class NativeHeader {
                 if (!matched) {
                     List<String> suffixes = CatalogUnit.of(f.kind()).stream().map(CatalogUnit::suffix).toList();
                     issues.add(new CatalogIssue(CatalogIssue.Severity.ERROR, file, line, name,
-                            "unknown unit suffix '" + suffix + "'" + Suggest.hint(suffix, suffixes) + "; write one of: "
+                            "unknown unit suffix '" + suffix + "'" + CatalogUnit.byName(suffix, f.kind())
+                                    .map(u -> " (did you mean '" + u.suffix() + "'?)")
+                                    .orElse(Suggest.hint(suffix, suffixes)) + "; write one of: "
                                     + f.headerChoices()));
                     matched = true;
                 }

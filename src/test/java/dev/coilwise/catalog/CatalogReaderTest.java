@@ -119,6 +119,14 @@ class CatalogReaderTest {
     }
 
     @Test
+    void aUnitSuffixWrittenInFullIsRefusedWithItsSuffixAsTheHint() {
+        String csv = "part_number,supplier,material,ends,wire_diameter_mm,outer_diameter_mm,free_length_inches,"
+                + "active_coils,unit_price\nP-1,Demo,music-wire,closed-ground,2,22,60,8,1\n";
+        assertThatThrownBy(() -> read(csv, false)).hasMessageContaining("column 'free_length_inches': unknown unit"
+                + " suffix 'inches' (did you mean 'in'?); write one of: free_length_mm, free_length_in, free_length_m");
+    }
+
+    @Test
     void aMissingRequiredColumnNamesTheAcceptedHeaders() {
         String csv = "part_number,supplier,material,ends,wire_diameter_mm,free_length_mm,active_coils,unit_price\n";
         assertThatThrownBy(() -> read(csv, false))

@@ -138,4 +138,23 @@ class ColumnMappingTest {
                 + " in}"), "m.yaml")).hasMessageContaining("map it under columns as 'free_length: <the export's column"
                 + " header>', or give it under constants");
     }
+
+    // Requirement files take unit symbols only ('1.2 inch' is refused there too), so a mapping does not accept unit
+    // names either; a name written in full points to its symbol, which edit distance alone would not find.
+    @Test
+    void aUnitWrittenInFullIsRefusedWithItsSymbolAsTheHint() {
+        String yaml = """
+                columns: {part_number: Item, supplier: Maker, material: Grade, ends: Ends, wire_diameter: Wire,
+                          outer_diameter: OD, free_length: Length, active_coils: Coils, unit_price: Price}
+                units: {length: %s}
+                """;
+        assertThatThrownBy(() -> ColumnMapping.parse(yaml.formatted("inches"), "m.yaml"))
+                .hasMessageContaining("unknown unit of wire_diameter 'inches' (did you mean 'in'?); allowed: mm, in, m");
+        assertThatThrownBy(() -> ColumnMapping.parse(yaml.formatted("Inch"), "m.yaml"))
+                .hasMessageContaining("unknown unit of free_length 'Inch' (did you mean 'in'?)");
+        assertThatThrownBy(() -> ColumnMapping.parse(yaml.formatted("millimetres"), "m.yaml"))
+                .hasMessageContaining("'millimetres' (did you mean 'mm'?)");
+        assertThatThrownBy(() -> ColumnMapping.parse(yaml.formatted("newtons"), "m.yaml"))
+                .hasMessageContaining("unknown unit of wire_diameter 'newtons'; allowed: mm, in, m");
+    }
 }
