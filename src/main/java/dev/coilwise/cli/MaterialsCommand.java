@@ -3,6 +3,7 @@ package dev.coilwise.cli;
 import dev.coilwise.materials.Material;
 import dev.coilwise.materials.MaterialTable;
 import dev.coilwise.materials.StrengthBand;
+import dev.coilwise.report.Caution;
 import java.util.Locale;
 import picocli.CommandLine.Command;
 
@@ -37,6 +38,8 @@ final class MaterialsCommand extends BaseCommand {
         }
         out().println();
         out().print(t.sources());
+        out().println();
+        out().println(Caution.TEXT);
         return ExitCode.OK;
     }
 }

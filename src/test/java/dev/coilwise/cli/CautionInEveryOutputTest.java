@@ -86,6 +86,13 @@ class CautionInEveryOutputTest {
     }
 
     @Test
+    void theMaterialsListEndsWithTheCaution() {
+        CliRunner r = CliRunner.run("materials");
+        assertThat(r.code()).isZero();
+        assertThat(r.out().strip()).endsWith(Caution.TEXT);
+    }
+
+    @Test
     void theHelpOfTheTopCommandCarriesTheCaution() {
         CliRunner r = CliRunner.run("--help");
         assertThat(r.code()).isZero();
