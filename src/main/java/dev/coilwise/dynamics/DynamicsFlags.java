@@ -15,7 +15,9 @@ import java.util.Locale;
  *
  * <p>Warnings: simulated stress above the allowable; coil clash; a figure more than {@value #DEVIATION_LIMIT_PCT} %
  * from the balance; a load or payload lighter than the spring's active coils; a payload that does not leave the
- * guide; an event that did not end in the simulated time. Notes: the rebound of an arrested load.
+ * guide; an event that did not end in the simulated time. Notes: the rebound of an arrested load. Flags never
+ * disqualify a design by themselves; {@code ranking.dynamics: strict} reads the simulated figures against the
+ * requirement's limits instead ({@link SimulatedLimits}).
  *
  * <p>The summary keeps its figures in SI and its flags in SI words (mm, N, MPa, kg, m/s). Outputs word them in the
  * requirement's units with {@link #warnings(SimulationSummary, Evaluation, Job, UnitSystem)} and

@@ -5,7 +5,8 @@
  * <p>Entry point: {@link dev.coilwise.dynamics.Simulator#simulate}, which returns a
  * {@link dev.coilwise.dynamics.SimulationSummary} (the figures and, through
  * {@link dev.coilwise.dynamics.DynamicsFlags}, warnings in words) and, on request, a
- * {@link dev.coilwise.dynamics.TimeHistory} for the report writers.
+ * {@link dev.coilwise.dynamics.TimeHistory} for the report writers. {@link dev.coilwise.dynamics.SimulatedLimits}
+ * checks the simulated figures against the requirement's hard limits for {@code ranking.dynamics: strict}.
  *
  * <p>Inside: {@link dev.coilwise.dynamics.LumpedChain} holds the chain's parameters and its modes; one small class
  * per force term (elements, coil clash, gravity, damping, drive force, guide friction) adds its forces and declares
