@@ -24,10 +24,11 @@ import java.util.stream.IntStream;
  * maker who adjusts L0 or the coil count to hit a test force narrows the real spread.
  *
  * <p>How it runs: every design of a run takes the same deviations (one seeded stream), so they are drawn once, in
- * blocks of {@value #BLOCK} made springs, and shared. Each made spring is worked by {@link SampleEvaluator}, which
- * gives exactly what building it ({@link SpringMaker}) and evaluating it ({@link Installation}) gives, without the
- * records. The work is cut into tasks of {@value #PROGRESS_STEP} made springs of one design that threads take in
- * turn; every task writes only its own samples, so the result does not depend on the threads or their timing.
+ * blocks of {@value #BLOCK} made springs, and shared; the pool's threads work the first made springs of a block while
+ * the rest are being drawn ({@link SampleBlock}). Each made spring is worked by {@link SampleEvaluator}, which gives
+ * exactly what building it ({@link SpringMaker}) and evaluating it ({@link Installation}) gives, without the records.
+ * The work is cut into tasks of {@value #PROGRESS_STEP} made springs of one design that threads take in turn; every
+ * task writes only its own samples, so the result does not depend on the threads or their timing.
  */
 public final class MonteCarlo {
     /** Samples between progress calls, and the made springs of one task. */
@@ -83,58 +84,15 @@ public final class MonteCarlo {
         DeviationSampler sampler = new DeviationSampler(settings.seed());
         int blockSize = Math.min(n, BLOCK);
         double[] z = new double[blockSize * DeviationSampler.DRAWS];
-        double[] one = new double[DeviationSampler.DRAWS];
         for (int start = 0; start < n; start += blockSize) {
-            int length = Math.min(blockSize, n - start);
-            for (int i = 0; i < length; i++) {
-                sampler.next(one);
-                System.arraycopy(one, 0, z, i * DeviationSampler.DRAWS, DeviationSampler.DRAWS);
-            }
-            int tasksPerDesign = (length + PROGRESS_STEP - 1) / PROGRESS_STEP;
-            int[][] counts = new int[designCount * tasksPerDesign][];
-            int first = start;
-            inParallel(counts.length, t -> {
-                int design = t / tasksPerDesign;
-                int from = (t % tasksPerDesign) * PROGRESS_STEP;
-                int to = Math.min(length, from + PROGRESS_STEP);
-                counts[t] = work(evaluators[design], z, from, to, first, values[design]);
-                reporter.advanced(to - from);
-            });
-            for (int t = 0; t < counts.length; t++) {
-                ok[t / tasksPerDesign] += counts[t][0];
-                invalid[t / tasksPerDesign] += counts[t][1];
-            }
+            new SampleBlock(evaluators, values, z, start, Math.min(blockSize, n - start), ok, invalid, reporter)
+                    .run(sampler);
         }
         List<ScatterSamples> out = new ArrayList<>();
         for (int i = 0; i < designCount; i++) {
             out.add(new ScatterSamples(n, settings.seed(), ok[i], invalid[i], evaluators[i].figures(), values[i]));
         }
         return out;
-    }
-
-    /**
-     * Works made springs {@code from} (incl.) to {@code to} (excl.) of a block of deviations whose first made spring
-     * is sample {@code offset}; writes their figures into {@code values} and returns {met, invalid}.
-     */
-    private static int[] work(SampleEvaluator evaluator, double[] z, int from, int to, int offset, double[][] values) {
-        int width = values.length;
-        double[] zi = new double[DeviationSampler.DRAWS];
-        double[] out = new double[width];
-        int ok = 0;
-        int invalid = 0;
-        for (int i = from; i < to; i++) {
-            System.arraycopy(z, i * DeviationSampler.DRAWS, zi, 0, DeviationSampler.DRAWS);
-            int outcome = evaluator.outcome(zi, out);
-            if (outcome == SampleEvaluator.INVALID) {
-                invalid++;
-            } else if (outcome == SampleEvaluator.MEETS) {
-                ok++;
-            }
-            for (int j = 0; j < width; j++) {
-                values[j][offset + i] = out[j];
-            }
-        }
-        return new int[] {ok, invalid};
     }
 
     /** Runs {@code body} for 0 ≤ i &lt; {@code count} on the common pool's threads, each taking the next i in turn. */
@@ -149,7 +107,7 @@ public final class MonteCarlo {
     }
 
     /** Sums progress over the tasks and passes it on, one call at a time, so the counts only ever grow. */
-    private static final class Reporter {
+    static final class Reporter {
         private final ScatterProgress progress;
         private final long total;
         private long done;
