@@ -106,8 +106,9 @@ public final class ScatterSamples {
                 p99.put(f.key(), Double.NaN);
                 continue;
             }
-            p01.put(f.key(), f.display(Percentiles.r7(v, LOW_PERCENTILE)));
-            p99.put(f.key(), f.display(Percentiles.r7(v, HIGH_PERCENTILE)));
+            double[] p = Percentiles.r7(v, LOW_PERCENTILE, HIGH_PERCENTILE);
+            p01.put(f.key(), f.display(p[0]));
+            p99.put(f.key(), f.display(p[1]));
         }
         return new ScatterSummary(samples, seed, probabilityOk(), p01, p99);
     }

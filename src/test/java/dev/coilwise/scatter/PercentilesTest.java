@@ -17,25 +17,29 @@ import org.junit.jupiter.api.Test;
  * {@link Percentiles#r7} against the general-purpose reference, Commons Math 3.6.1 {@code Percentile} with
  * {@code EstimationType.R_7} used as the summary used it before (set the data, then evaluate): the same value, bit
  * for bit, over generated data sets (ties, zeros of either sign, infinities, sorted and reversed orders, one to a few
- * thousand values) and percentiles (the summary's 1 and 99, the ends, and any in between).
+ * thousand values) and one to three percentiles asked at once (the summary's 1 and 99, the ends, any in between).
  */
 class PercentilesTest {
-    /** Data and a percentile. */
-    record Case(double[] data, double percentile) {
+    /** Data and the percentiles asked of it at once. */
+    record Case(double[] data, double[] percentiles) {
         @Override
         public String toString() {
-            return "p" + percentile + " of " + (data.length <= 40 ? Arrays.toString(data) : data.length + " values");
+            return "p" + Arrays.toString(percentiles) + " of "
+                    + (data.length <= 40 ? Arrays.toString(data) : data.length + " values");
         }
     }
 
     @Property(tries = 3000)
-    void givesExactlyTheValueOfCommonsMath(@ForAll("cases") Case c) {
+    void givesExactlyTheValuesOfCommonsMath(@ForAll("cases") Case c) {
         double[] copy = c.data().clone();
+        double[] actual = Percentiles.r7(c.data(), c.percentiles());
         Percentile reference = new Percentile().withEstimationType(Percentile.EstimationType.R_7);
         reference.setData(c.data());
-        Double expected = reference.evaluate(c.percentile());
-        // Boxed: Double.equals compares bit patterns (NaN, from ∞ − ∞, equals NaN; −0.0 differs from 0.0).
-        assertThat(Double.valueOf(Percentiles.r7(c.data(), c.percentile()))).as("%s", c).isEqualTo(expected);
+        for (int i = 0; i < actual.length; i++) {
+            // Boxed: Double.equals compares bit patterns (NaN, from ∞ − ∞, equals NaN; −0.0 differs from 0.0).
+            Double expected = reference.evaluate(c.percentiles()[i]);
+            assertThat(Double.valueOf(actual[i])).as("%s, p%s", c, c.percentiles()[i]).isEqualTo(expected);
+        }
         assertThat(c.data()).as("data left as given").isEqualTo(copy);
     }
 
@@ -47,8 +51,9 @@ class PercentilesTest {
         for (int i = 0; i < v.length; i++) {
             v[i] = v.length - i;
         }
-        assertThat(Percentiles.r7(v, 1)).isCloseTo(100.99, within(1e-9));
-        assertThat(Percentiles.r7(v, 99)).isCloseTo(9900.01, within(1e-9));
+        double[] p = Percentiles.r7(v, 1, 99);
+        assertThat(p[0]).isCloseTo(100.99, within(1e-9));
+        assertThat(p[1]).isCloseTo(9900.01, within(1e-9));
     }
 
     @Provide
@@ -87,13 +92,16 @@ class PercentilesTest {
                 }
             }
         }
-        double p = switch (r.nextInt(6)) {
-            case 0 -> ScatterSamples.LOW_PERCENTILE;
-            case 1 -> ScatterSamples.HIGH_PERCENTILE;
-            case 2 -> 100;
-            case 3 -> 1e-9;
-            default -> 100 * (1 - r.nextDouble()); // (0, 100]
-        };
+        double[] p = new double[1 + r.nextInt(3)];
+        for (int i = 0; i < p.length; i++) {
+            p[i] = switch (r.nextInt(6)) {
+                case 0 -> ScatterSamples.LOW_PERCENTILE;
+                case 1 -> ScatterSamples.HIGH_PERCENTILE;
+                case 2 -> 100;
+                case 3 -> 1e-9;
+                default -> 100 * (1 - r.nextDouble()); // (0, 100]
+            };
+        }
         return new Case(v, p);
     }
 }
