@@ -71,6 +71,9 @@ public final class MonteCarlo {
     static List<ScatterSamples> sample(List<Spring> designs, List<HalfWidths> widths, Requirement req,
                                        ScatterSettings settings, ScatterProgress progress) {
         int designCount = designs.size();
+        if (designCount == 0) {
+            return List.of();
+        }
         int n = settings.samples();
         SampleEvaluator[] evaluators = new SampleEvaluator[designCount];
         double[][][] values = new double[designCount][][];
