@@ -58,7 +58,7 @@ abstract class Installation {
 
     /** Arrest: the energy balance is re-run on the made spring; a pocket, if any, keeps its length. */
     static final class Buffer extends Installation {
-        private static final List<Figure> FIGURES = List.of(Figure.MAX_COMPRESSION, Figure.PEAK_FORCE,
+        static final List<Figure> FIGURES = List.of(Figure.MAX_COMPRESSION, Figure.PEAK_FORCE,
                 Figure.PEAK_DECELERATION, Figure.STRESS_AT_PEAK, Figure.RATE, Figure.SOLID_LENGTH);
 
         Buffer(Requirement requirement) {
@@ -90,7 +90,7 @@ abstract class Installation {
      * around the target and every hard limit holds at the actual cocked compression.
      */
     static final class Launcher extends Installation {
-        private static final List<Figure> FIGURES = List.of(Figure.COCKED_COMPRESSION, Figure.PREDICTED_HEIGHT,
+        static final List<Figure> FIGURES = List.of(Figure.COCKED_COMPRESSION, Figure.PREDICTED_HEIGHT,
                 Figure.COCKING_FORCE, Figure.STRESS_AT_COCKED, Figure.RATE, Figure.SOLID_LENGTH);
 
         private final Launch launch;

@@ -1,11 +1,9 @@
 package dev.coilwise.scatter;
 
-import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.apache.commons.math3.stat.descriptive.DescriptiveStatistics;
-import org.apache.commons.math3.stat.descriptive.rank.Percentile;
 
 /**
  * Every made spring of one Monte Carlo run: its working figures (SI) and how many met the requirement. A made spring
@@ -62,7 +60,29 @@ public final class ScatterSamples {
         if (i < 0) {
             throw new IllegalArgumentException("figure " + f.key() + " is not collected for this job; collected: " + figures);
         }
-        return Arrays.stream(values[i]).filter(v -> !Double.isNaN(v)).toArray();
+        double[] v = valid(values[i]);
+        return v == values[i] ? v.clone() : v;
+    }
+
+    /** {@code all} without its NaNs, in order: {@code all} itself when it has none. */
+    private static double[] valid(double[] all) {
+        int count = 0;
+        for (double v : all) {
+            if (!Double.isNaN(v)) {
+                count++;
+            }
+        }
+        if (count == all.length) {
+            return all;
+        }
+        double[] out = new double[count];
+        int j = 0;
+        for (double v : all) {
+            if (!Double.isNaN(v)) {
+                out[j++] = v;
+            }
+        }
+        return out;
     }
 
     /** Mean, standard deviation and the rest of one figure (SI), Commons Math. */
@@ -72,22 +92,23 @@ public final class ScatterSamples {
 
     /**
      * The summary: percentiles by the R-7 rule (linear between order statistics; Hyndman &amp; Fan 1996, definition 7,
-     * as in Commons Math {@code Percentile.EstimationType.R_7}), in the unit of each figure's key.
+     * as in Commons Math {@code Percentile.EstimationType.R_7}, whose values {@link Percentiles} gives exactly), in the
+     * unit of each figure's key.
      */
     public ScatterSummary summary() {
         Map<String, Double> p01 = new LinkedHashMap<>();
         Map<String, Double> p99 = new LinkedHashMap<>();
-        Percentile p = new Percentile().withEstimationType(Percentile.EstimationType.R_7);
-        for (Figure f : figures) {
-            double[] v = values(f);
+        for (int i = 0; i < figures.size(); i++) {
+            Figure f = figures.get(i);
+            double[] v = valid(values[i]); // not modified
             if (v.length == 0) {
                 p01.put(f.key(), Double.NaN);
                 p99.put(f.key(), Double.NaN);
                 continue;
             }
-            p.setData(v);
-            p01.put(f.key(), f.display(p.evaluate(LOW_PERCENTILE)));
-            p99.put(f.key(), f.display(p.evaluate(HIGH_PERCENTILE)));
+            double[] p = Percentiles.r7(v, LOW_PERCENTILE, HIGH_PERCENTILE);
+            p01.put(f.key(), f.display(p[0]));
+            p99.put(f.key(), f.display(p[1]));
         }
         return new ScatterSummary(samples, seed, probabilityOk(), p01, p99);
     }

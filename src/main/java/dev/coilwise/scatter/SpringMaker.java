@@ -32,6 +32,11 @@ final class SpringMaker {
                 m.allowableStatic(), m.allowableSetRemoved(), List.of(strength), List.of(moduli), m.source());
     }
 
+    /** The wire of every made spring without modulus scatter: the nominal wire's S_ut, E and G in one band. */
+    Material pinned() {
+        return pinned;
+    }
+
     /** The free length deviation of a made spring from its normalised deviations, m. */
     double freeLengthDeviation(double[] z) {
         return z[2] * halfWidths.freeLength() / DeviationSampler.SIGMAS;
