@@ -104,7 +104,7 @@ final class EventRun {
                 double tEnd, boolean keepHistory) {
         double[] y = y0.clone();
         int n = chain.masses();
-        PeakTracker peaks = new PeakTracker(List.of(s -> s[n], probes::topForce, probes::peakStress));
+        PeakTracker peaks = new PeakTracker(n, probes.gauges(), ChainProbes.GROUPS);
         List<StepHandler> handlers = new ArrayList<>(List.of(peaks));
         HistorySampler sampler = null;
         if (keepHistory) {
@@ -116,7 +116,9 @@ final class EventRun {
         double e0 = probes.energy(y, loadMass, loadForce);
         ChainRun run = new ChainRun(chain, face, equations, jobDetectors);
         double tFinal = run.run(y, loadOnAtStart, scales, tEnd, handlers);
-        return new Outcome(y, tFinal, tFinal < tEnd, peaks.max(0), peaks.max(1), peaks.max(2), clash.firstTime(),
+        double top = Math.max(0, peaks.max(ChainProbes.TOP));
+        return new Outcome(y, tFinal, tFinal < tEnd, peaks.max(ChainProbes.LOAD), probes.topForceOf(top),
+                probes.stressOf(Math.max(top, peaks.max(ChainProbes.LOWER))), clash.firstTime(),
                 clash.firstElement(), sampler == null ? TimeHistory.empty() : sampler.history(), e0,
                 probes.energy(y, loadMass, loadForce));
     }
