@@ -43,6 +43,7 @@ final class EventRun {
     private final ChainEquations equations;
     private final ChainProbes probes;
     private final List<StepHandler> observers = new ArrayList<>();
+    private ChainRun.Accuracy accuracy = ChainRun.Accuracy.DEFAULT;
 
     /**
      * @param loadMass  kg, 0 without a load
@@ -71,6 +72,12 @@ final class EventRun {
 
     ChainProbes probes() {
         return probes;
+    }
+
+    /** Integrates to {@code a} instead of {@link ChainRun.Accuracy#DEFAULT} (tests compare with a tight run). */
+    EventRun accurateTo(ChainRun.Accuracy a) {
+        accuracy = a;
+        return this;
     }
 
     /** Adds a step handler that watches the run (tests use it for the energy audit). */
@@ -114,7 +121,7 @@ final class EventRun {
         }
         handlers.addAll(observers);
         double e0 = probes.energy(y, loadMass, loadForce);
-        ChainRun run = new ChainRun(chain, face, equations, jobDetectors);
+        ChainRun run = new ChainRun(chain, face, equations, jobDetectors, accuracy);
         double tFinal = run.run(y, loadOnAtStart, scales, tEnd, handlers);
         double top = Math.max(0, peaks.max(ChainProbes.TOP));
         return new Outcome(y, tFinal, tFinal < tEnd, peaks.max(ChainProbes.LOAD), probes.topForceOf(top),
