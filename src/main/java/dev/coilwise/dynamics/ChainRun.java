@@ -105,10 +105,8 @@ final class ChainRun {
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(MIN_STEP * scales.time(),
                 MAX_STEP * scales.time(), abs, rel);
         integrator.setMaxEvaluations(MAX_EVALUATIONS);
-        double maxCheck = chain.shortestPeriod() / 2;
-        for (EventHandler h : detectors) {
-            integrator.addEventHandler(h, maxCheck, EVENT_CONVERGENCE * scales.time(), EVENT_ITERATIONS);
-        }
+        integrator.addEventHandler(new CombinedDetector(detectors, equations, n, scales.time()),
+                chain.shortestPeriod() / 2, EVENT_CONVERGENCE * scales.time(), EVENT_ITERATIONS);
         handlers.forEach(integrator::addStepHandler);
         try {
             return integrator.integrate(equations, 0, y, tEnd, y);
