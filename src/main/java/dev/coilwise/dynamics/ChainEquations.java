@@ -13,6 +13,7 @@ final class ChainEquations implements FirstOrderDifferentialEquations {
     private final LumpedChain chain;
     private final double loadMass;
     private final List<ForceTerm> terms;
+    private final ForceTerm[] termArray;
     private final double[] f;
 
     /** @param loadMass kg, 0 without a load (the load coordinates then stay still and never touch the face) */
@@ -20,6 +21,7 @@ final class ChainEquations implements FirstOrderDifferentialEquations {
         this.chain = chain;
         this.loadMass = loadMass;
         this.terms = List.copyOf(terms);
+        this.termArray = terms.toArray(new ForceTerm[0]);
         this.f = new double[chain.masses() + 1];
     }
 
@@ -37,7 +39,7 @@ final class ChainEquations implements FirstOrderDifferentialEquations {
         int n = chain.masses();
         System.arraycopy(y, n + 1, yDot, 0, n + 1);
         Arrays.fill(f, 0);
-        for (ForceTerm term : terms) {
+        for (ForceTerm term : termArray) {
             term.addForces(y, f);
         }
         double m = chain.nodeMass();
