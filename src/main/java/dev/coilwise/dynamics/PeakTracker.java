@@ -2,6 +2,7 @@ package dev.coilwise.dynamics;
 
 import java.util.Arrays;
 import java.util.List;
+import org.apache.commons.math3.ode.sampling.AbstractStepInterpolator;
 import org.apache.commons.math3.ode.sampling.StepHandler;
 import org.apache.commons.math3.ode.sampling.StepInterpolator;
 
@@ -10,7 +11,8 @@ import org.apache.commons.math3.ode.sampling.StepInterpolator;
  * position), each counted towards one group whose largest value is reported.
  *
  * <p>Within a step, a gauge φ is modelled by the quintic Hermite polynomial that matches φ, φ' and φ'' at both ends
- * of the step, read through the step interpolator once at each end (positions, speeds and their derivatives). At the
+ * of the step, read through the step interpolator at each end (positions, speeds and their derivatives; a step's end
+ * serves as the next one's start unless an event cut it short). At the
  * ends of an integrator step these are the integrator's own state and the equations' derivatives there (the
  * Dormand–Prince dense output reproduces both); at an event inside a step they are the dense output's values. The
  * polynomial's error is at most h⁶·max|φ⁽⁶⁾|/46080 (the Hermite interpolation error (x − x₀)³(x − x₁)³·f⁽⁶⁾(ξ)/6!,
@@ -67,10 +69,12 @@ final class PeakTracker implements StepHandler {
     private final int speeds;
     private final Gauge[] gauges;
     private final double[] max;
-    private final double[] y0;
-    private final double[] a0;
-    private final double[] y1;
-    private final double[] a1;
+    private double[] y0;
+    private double[] a0;
+    private double[] y1;
+    private double[] a1;
+    /** Time of the state held in y0 and a0 for the next step, s, or NaN. */
+    private double start = Double.NaN;
 
     /**
      * @param masses N; speeds sit N + 1 places after their positions (layout in {@link TopFace})
@@ -108,7 +112,9 @@ final class PeakTracker implements StepHandler {
         if (!(h > 0)) {
             return;
         }
-        read(interpolator, t0, y0, a0);
+        if (!(t0 == start)) {
+            read(interpolator, t0, y0, a0);
+        }
         read(interpolator, t1, y1, a1);
         for (Gauge g : gauges) {
             double f0 = g.value(y0);
@@ -126,6 +132,23 @@ final class PeakTracker implements StepHandler {
                 max[k] = Math.max(max[k], interiorMax(f0, f1, d0, d1, c0, c1));
             }
         }
+        keepEnd(interpolator, t1);
+    }
+
+    /**
+     * Keeps the step's end as the next step's start, as a Runge–Kutta step with its first stage the same as the last
+     * (Dormand–Prince) starts from exactly that state and derivative; unless an event cut the step short, after which
+     * the derivatives may jump, or the interpolator does not say.
+     */
+    private void keepEnd(StepInterpolator interpolator, double t1) {
+        boolean cut = !(interpolator instanceof AbstractStepInterpolator a) || t1 != a.getGlobalCurrentTime();
+        start = cut ? Double.NaN : t1;
+        double[] swap = y0;
+        y0 = y1;
+        y1 = swap;
+        swap = a0;
+        a0 = a1;
+        a1 = swap;
     }
 
     private static void read(StepInterpolator interpolator, double t, double[] y, double[] yDot) {
