@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 import dev.coilwise.mechanics.DesignEvaluator;
 import dev.coilwise.mechanics.Evaluation;
 import dev.coilwise.model.Arrest;
+import dev.coilwise.model.Launch;
 import dev.coilwise.model.Requirement;
 import dev.coilwise.model.Spring;
 import java.util.OptionalDouble;
@@ -92,18 +93,27 @@ class PeakTrackerTest {
     /** Runs {@code r} and checks the summary's peaks against a dense search of the same solution. */
     private static void assertPeaksMatchDenseSearch(Spring spring, Requirement r) {
         Evaluation e = DesignEvaluator.evaluate(spring, r);
-        ArrestSimulation sim = new ArrestSimulation(spring, (Arrest) r.job(), e, SimulationOptions.defaults());
-        ChainProbes probes = sim.run().probes();
-        DenseSearch force = new DenseSearch(probes::topForce);
-        DenseSearch stress = new DenseSearch(probes::peakStress);
-        sim.run().observe(force).observe(stress);
-        SimulationSummary s = sim.simulate().summary();
+        EventRun run;
+        java.util.function.Supplier<SimulationResult> simulate;
+        if (r.job() instanceof Arrest a) {
+            ArrestSimulation sim = new ArrestSimulation(spring, a, e, SimulationOptions.defaults());
+            run = sim.run();
+            simulate = sim::simulate;
+        } else {
+            LaunchSimulation sim = new LaunchSimulation(spring, (Launch) r.job(), e, SimulationOptions.defaults());
+            run = sim.run();
+            simulate = sim::simulate;
+        }
+        DenseSearch force = new DenseSearch(run.probes()::topForce);
+        DenseSearch stress = new DenseSearch(run.probes()::peakStress);
+        run.observe(force).observe(stress);
+        SimulationSummary s = simulate.get().summary();
         assertThat(s.peakForce()).isCloseTo(force.max, within(1e-6 * force.max));
         assertThat(s.peakStress()).isCloseTo(stress.max, within(1e-6 * stress.max));
     }
 
     // Consistency: the tracker's peaks are those of the solution it is handed, to 1e-6 (a drop, a drop past solid
-    // with coil clash, and a ramp into a preloaded pocket with a drive force).
+    // with coil clash, a ramp into a preloaded pocket with a drive force, launches of a heavy and a light payload).
     @Test
     void peaksMatchADenseSearchOfTheSameSolution() {
         Spring spring = Fixtures.spring();
@@ -111,5 +121,7 @@ class PeakTrackerTest {
         assertPeaksMatchDenseSearch(spring, Fixtures.drop(2, 0.30));
         assertPeaksMatchDenseSearch(spring, Fixtures.requirement(new Arrest(2, 1.0, Math.toRadians(30), 20,
                 Double.NaN), OptionalDouble.of(0.070)));
+        assertPeaksMatchDenseSearch(spring, Fixtures.launch(0.2, 0.5, Math.PI / 2, 0.1));
+        assertPeaksMatchDenseSearch(spring, Fixtures.launch(spring.activeMass() / 5, 0.5, Math.PI / 2, 0));
     }
 }
