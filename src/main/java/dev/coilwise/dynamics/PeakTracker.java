@@ -153,8 +153,14 @@ final class PeakTracker implements StepHandler {
         a1 = swap;
     }
 
+    /**
+     * Copies state and derivatives at {@code t}. The interpolator keeps what it computed last, so when it already
+     * stands at {@code t} (the event check has just read the step's end) nothing is computed again.
+     */
     private static void read(StepInterpolator interpolator, double t, double[] y, double[] yDot) {
-        interpolator.setInterpolatedTime(t);
+        if (!(interpolator.getInterpolatedTime() == t)) {
+            interpolator.setInterpolatedTime(t);
+        }
         System.arraycopy(interpolator.getInterpolatedState(), 0, y, 0, y.length);
         System.arraycopy(interpolator.getInterpolatedDerivatives(), 0, yDot, 0, yDot.length);
     }
