@@ -20,14 +20,15 @@ import org.junit.jupiter.api.Test;
  * The default integrator tolerances ({@link ChainRun.Accuracy#DEFAULT}) against tight runs of the same design.
  * Without coil clash every reported figure lies within {@value #BOUND} of a run at 1e-11, on arrests and launches of
  * varied springs, with damping, a pocket, a sudden load, losses, a light payload, and at 5, 20 and 60 masses (measured:
- * 2.3e-6 at worst, on peak force and stress). Figures are printed to 3–4 significant figures, so 1e-5 stays far below
- * the last printed digit. With coil clash the figures after the first clash depend on the exact timing of the coils'
- * contacts and do not settle as the tolerance is tightened; there the default must fall within the spread of tight
- * runs. Non-regression of the numerical method; the physics is validated by the other tests of this package.
+ * 6.1e-6 at worst, on peak force and stress). Figures are printed to 3–4 significant figures, whose last digit is
+ * worth at least 1e-4 of the figure, so the bound is at most a fifth of it. With coil clash the figures after the
+ * first clash depend on the exact timing of the coils' contacts and do not settle as the tolerance is tightened;
+ * there the default must fall within the spread of tight runs. Non-regression of the numerical method; the physics is
+ * validated by the other tests of this package.
  */
 class IntegratorAccuracyTest {
     /** Largest relative change of a reported figure allowed. */
-    private static final double BOUND = 1e-5;
+    private static final double BOUND = 2e-5;
     private static final ChainRun.Accuracy TIGHT = new ChainRun.Accuracy(1e-11, 1e-11);
 
     private static SimulationSummary run(Spring spring, Requirement r, SimulationOptions opt, ChainRun.Accuracy a) {
