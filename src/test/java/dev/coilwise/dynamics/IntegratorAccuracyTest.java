@@ -95,7 +95,7 @@ class IntegratorAccuracyTest {
 
     // A drop past solid (0.30 m onto L0 − Ls = 44 mm). The first clash (time, element) is well determined and must
     // match to the bound. After it, tight runs differ among themselves (at 1e-9 to 1e-13: 2.7e-5 in compression,
-    // 0.11 % in stop time, 0.7 % in stress, 0.36 % in rebound speed, 22 % in peak force, which the coil-contact
+    // 0.11 % in stop time, 0.7 % in stress, 0.5 % in rebound speed, 22 % in peak force, which the coil-contact
     // spikes set); the default must lie within four times that spread of their median.
     @Test
     void clashRunLiesWithinTheSpreadOfTightRuns() {
