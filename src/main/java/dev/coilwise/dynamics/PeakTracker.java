@@ -30,7 +30,7 @@ import org.apache.commons.math3.ode.sampling.StepInterpolator;
 final class PeakTracker implements StepHandler {
     /** Points at which the derivative of a step's polynomial is scanned for a sign change. */
     static final int SCAN_POINTS = 16;
-    /** Newton iterations allowed to refine one maximum (each at least halves the bracket). */
+    /** Iterations allowed to refine one maximum: Newton steps kept inside a shrinking bracket, else bisection. */
     static final int REFINE_ITERATIONS = 30;
     /** A maximum is refined until its place within the step is known to this fraction of the step. */
     static final double REFINE_TOLERANCE = 1e-9;
@@ -127,7 +127,7 @@ final class PeakTracker implements StepHandler {
             double c1 = h * h * g.acceleration(a1, speeds);
             int k = g.group();
             max[k] = Math.max(max[k], Math.max(f0, f1));
-            // Bernstein control points of the quintic Hermite polynomial on s in [0, 1]; the two at the ends are f0, f1.
+            // Bernstein control points of the quintic Hermite polynomial on s in [0, 1] (the end ones are f0, f1).
             double bound = Math.max(Math.max(f0 + d0 / 5, f0 + 2 * d0 / 5 + c0 / 20),
                     Math.max(f1 - d1 / 5, f1 - 2 * d1 / 5 + c1 / 20));
             if (bound > max[k]) {
