@@ -5,7 +5,8 @@ import java.util.List;
 
 /**
  * Quantities read off a state of the chain from its geometry alone (safe on interpolated states): the force between
- * spring and load, the largest wire force of any element and its corrected stress, and the mechanical energy.
+ * spring and load, the largest corrected stress of any element, and the mechanical energy; and the gauges from whose
+ * largest values {@link PeakTracker} gives the peaks of the first two.
  */
 final class ChainProbes {
     /** Gauge group of the load position. */
