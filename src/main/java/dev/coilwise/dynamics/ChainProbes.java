@@ -1,10 +1,23 @@
 package dev.coilwise.dynamics;
 
+import java.util.ArrayList;
+import java.util.List;
+
 /**
  * Quantities read off a state of the chain from its geometry alone (safe on interpolated states): the force between
- * spring and load, the largest wire force of any element and its corrected stress, and the mechanical energy.
+ * spring and load, the largest corrected stress of any element, and the mechanical energy; and the gauges from whose
+ * largest values {@link PeakTracker} gives the peaks of the first two.
  */
 final class ChainProbes {
+    /** Gauge group of the load position. */
+    static final int LOAD = 0;
+    /** Gauge group of the top element's closure. */
+    static final int TOP = 1;
+    /** Gauge group of the closures of elements 1..N. */
+    static final int LOWER = 2;
+    /** Number of gauge groups. */
+    static final int GROUPS = 3;
+
     private final LumpedChain chain;
     private final TopFace face;
     private final ClashForce clash;
@@ -18,24 +31,55 @@ final class ChainProbes {
         this.stressPerNewton = stressPerNewton;
     }
 
-    /** Compressive force in the top element, wire plus coil contact, N. */
-    double topForce(double[] y) {
-        int top = chain.elements();
-        return chain.elementRate() * face.geometricDeformation(top, y) + clash.geometricExtra(top, y);
+    /**
+     * The gauges whose largest values over a run give its peaks ({@link PeakTracker}): the load position (group
+     * {@link #LOAD}); the top element's closure, max(0, u_L − u_N, stop − u_N), as its two smooth parts (group
+     * {@link #TOP}, the 0 applied by {@link #topForceOf}); and the closure of every other element (group
+     * {@link #LOWER}). The largest of a maximum of functions is the largest of their largest values, and the top force
+     * and the stress grow with the closure, so the peaks follow from these maxima exactly.
+     */
+    List<PeakTracker.Gauge> gauges() {
+        int n = chain.masses();
+        List<PeakTracker.Gauge> g = new ArrayList<>();
+        g.add(new PeakTracker.Gauge(n, -1, 0, LOAD));
+        if (face.loadPresent()) {
+            g.add(new PeakTracker.Gauge(n, n - 1, 0, TOP));
+        }
+        if (face.hasStop()) {
+            g.add(new PeakTracker.Gauge(-1, n - 1, face.stop(), TOP));
+        }
+        for (int j = 1; j <= n; j++) {
+            g.add(new PeakTracker.Gauge(j - 1, j - 2, 0, LOWER));
+        }
+        return g;
     }
 
-    /** Largest compressive wire force of any element, k_e·δ_j, N (coil contact excluded). */
-    double maxWireForce(double[] y) {
-        double max = Double.NEGATIVE_INFINITY;
-        for (int j = 1; j <= chain.elements(); j++) {
-            max = Math.max(max, face.geometricDeformation(j, y));
-        }
-        return chain.elementRate() * max;
+    /** Compressive force in the top element, wire plus coil contact, N. */
+    double topForce(double[] y) {
+        return topForceOf(face.geometricDeformation(chain.elements(), y));
+    }
+
+    /**
+     * Compressive force of the top element at closure {@code closure} (m; a negative one counts as 0), wire plus
+     * coil contact, N. It grows with the closure.
+     */
+    double topForceOf(double closure) {
+        double d = Math.max(0, closure);
+        return chain.elementRate() * d + chain.clashRate() * Math.max(0, d - chain.clashClosure());
+    }
+
+    /** Corrected shear stress of an element at closure {@code closure}, m, Pa (zero unless compressed). */
+    double stressOf(double closure) {
+        return stressPerNewton * Math.max(0, chain.elementRate() * closure);
     }
 
     /** Largest corrected shear stress of any element, Pa (zero when no element is compressed). */
     double peakStress(double[] y) {
-        return stressPerNewton * Math.max(0, maxWireForce(y));
+        double max = Double.NEGATIVE_INFINITY;
+        for (int j = 1; j <= chain.elements(); j++) {
+            max = Math.max(max, face.geometricDeformation(j, y));
+        }
+        return stressOf(max);
     }
 
     /**

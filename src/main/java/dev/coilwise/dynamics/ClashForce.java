@@ -12,6 +12,7 @@ final class ClashForce implements ForceTerm {
     private final LumpedChain chain;
     private final TopFace face;
     private final boolean[] clashed;
+    private int clashedCount;
     private double firstTime = Double.NaN;
     private int firstElement;
 
@@ -23,8 +24,10 @@ final class ClashForce implements ForceTerm {
 
     @Override
     public void start(double[] y) {
+        clashedCount = 0;
         for (int j = 1; j <= chain.elements(); j++) {
             clashed[j] = face.geometricDeformation(j, y) > chain.clashClosure();
+            clashedCount += clashed[j] ? 1 : 0;
             if (clashed[j] && Double.isNaN(firstTime)) {
                 firstTime = 0;
                 firstElement = j;
@@ -34,6 +37,9 @@ final class ClashForce implements ForceTerm {
 
     @Override
     public void addForces(double[] y, double[] f) {
+        if (clashedCount == 0) {
+            return;
+        }
         double sc = chain.clashClosure();
         double kc = chain.clashRate();
         int n = chain.masses();
@@ -108,6 +114,7 @@ final class ClashForce implements ForceTerm {
                 }
             }
             clashed[at] = !clashed[at];
+            clashedCount += clashed[at] ? 1 : -1;
             if (clashed[at] && Double.isNaN(firstTime)) {
                 firstTime = t;
                 firstElement = at;

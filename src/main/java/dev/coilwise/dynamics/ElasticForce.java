@@ -10,15 +10,23 @@ final class ElasticForce implements ForceTerm {
         this.face = face;
     }
 
+    /**
+     * Mass i feels k_e·(u_{i+1} − 2u_i + u_{i−1}) from the elements below and above it (u_0 = 0 at the base); the top
+     * mass's upper element reaches the face, whose force the face also passes to the load.
+     */
     @Override
     public void addForces(double[] y, double[] f) {
         double ke = chain.elementRate();
+        int n = chain.masses();
         double below = 0;
-        for (int j = 1; j <= chain.masses(); j++) {
-            double u = y[j - 1];
-            TopFace.applyElementForce(j, ke * (u - below), f);
+        double u = y[0];
+        for (int i = 0; i < n - 1; i++) {
+            double above = y[i + 1];
+            f[i] += ke * (above - 2 * u + below);
             below = u;
+            u = above;
         }
-        face.applyTopForce(ke * (face.position(y) - below), f);
+        f[n - 1] -= ke * (u - below);
+        face.applyTopForce(ke * (face.position(y) - u), f);
     }
 }

@@ -43,6 +43,7 @@ final class EventRun {
     private final ChainEquations equations;
     private final ChainProbes probes;
     private final List<StepHandler> observers = new ArrayList<>();
+    private ChainRun.Accuracy accuracy = ChainRun.Accuracy.DEFAULT;
 
     /**
      * @param loadMass  kg, 0 without a load
@@ -71,6 +72,12 @@ final class EventRun {
 
     ChainProbes probes() {
         return probes;
+    }
+
+    /** Integrates to {@code a} instead of {@link ChainRun.Accuracy#DEFAULT} (tests compare with a tight run). */
+    EventRun accurateTo(ChainRun.Accuracy a) {
+        accuracy = a;
+        return this;
     }
 
     /** Adds a step handler that watches the run (tests use it for the energy audit). */
@@ -104,7 +111,7 @@ final class EventRun {
                 double tEnd, boolean keepHistory) {
         double[] y = y0.clone();
         int n = chain.masses();
-        PeakTracker peaks = new PeakTracker(List.of(s -> s[n], probes::topForce, probes::peakStress));
+        PeakTracker peaks = new PeakTracker(n, probes.gauges(), ChainProbes.GROUPS);
         List<StepHandler> handlers = new ArrayList<>(List.of(peaks));
         HistorySampler sampler = null;
         if (keepHistory) {
@@ -114,9 +121,11 @@ final class EventRun {
         }
         handlers.addAll(observers);
         double e0 = probes.energy(y, loadMass, loadForce);
-        ChainRun run = new ChainRun(chain, face, equations, jobDetectors);
+        ChainRun run = new ChainRun(chain, face, equations, jobDetectors, accuracy);
         double tFinal = run.run(y, loadOnAtStart, scales, tEnd, handlers);
-        return new Outcome(y, tFinal, tFinal < tEnd, peaks.max(0), peaks.max(1), peaks.max(2), clash.firstTime(),
+        double top = Math.max(0, peaks.max(ChainProbes.TOP));
+        return new Outcome(y, tFinal, tFinal < tEnd, peaks.max(ChainProbes.LOAD), probes.topForceOf(top),
+                probes.stressOf(Math.max(top, peaks.max(ChainProbes.LOWER))), clash.firstTime(),
                 clash.firstElement(), sampler == null ? TimeHistory.empty() : sampler.history(), e0,
                 probes.energy(y, loadMass, loadForce));
     }

@@ -12,6 +12,14 @@ interface ForceTerm {
     /** Adds this term's forces for state {@code y} (layout as in {@link TopFace}). */
     void addForces(double[] y, double[] f);
 
+    /**
+     * Whether the term's forces never change (they do not depend on the state, the time or any switch): such a term
+     * is asked for its forces once, with a null state.
+     */
+    default boolean constant() {
+        return false;
+    }
+
     /** Sets the term's own switches from the initial state. */
     default void start(double[] y) {
     }

@@ -12,6 +12,11 @@ final class GravityForce implements ForceTerm {
     }
 
     @Override
+    public boolean constant() {
+        return true;
+    }
+
+    @Override
     public void addForces(double[] y, double[] f) {
         double w = chain.nodeMass() * chain.axialGravity();
         for (int i = 0; i < chain.masses(); i++) {

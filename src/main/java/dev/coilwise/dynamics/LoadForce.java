@@ -14,6 +14,11 @@ final class LoadForce implements ForceTerm {
     }
 
     @Override
+    public boolean constant() {
+        return true;
+    }
+
+    @Override
     public void addForces(double[] y, double[] f) {
         f[masses] += force;
     }

@@ -49,6 +49,16 @@ final class TopFace {
         return stop != Double.NEGATIVE_INFINITY;
     }
 
+    /** Position of the end stop, m, or −∞ without one. */
+    double stop() {
+        return stop;
+    }
+
+    /** Whether a load or payload exists. */
+    boolean loadPresent() {
+        return loadPresent;
+    }
+
     /** Position of the face under the current flags, m. */
     double position(double[] y) {
         if (loadOn) {

@@ -12,8 +12,9 @@
  * per force term (elements, coil clash, gravity, damping, drive force, guide friction) adds its forces and declares
  * the switching functions of its own discontinuities; the massless top face is held by the load, the end stop of a
  * preloaded pocket or nothing, switched only at event roots. The equations are integrated with Commons Math's
- * Dormand–Prince 8(5,3) integrator; peaks are refined on the step interpolant. Every modelling choice, its reason and
- * the validation behind it are in docs/dynamics.md.
+ * Dormand–Prince 8(5,3) integrator, all switching functions folded into one event handler; peaks are found between
+ * steps on a quintic Hermite polynomial of each element's closure. Every modelling choice, its reason and the
+ * validation behind it are in docs/dynamics.md.
  *
  * <p>Units: SI throughout (m, N, Pa, kg, s). Positions are measured towards the base from the spring's free length.
  */
