@@ -11,6 +11,10 @@ public final class Main {
     }
 
     public static void main(String[] args) {
+        java.util.OptionalInt child = Relaunch.attempt(args);
+        if (child.isPresent()) {
+            System.exit(child.getAsInt());
+        }
         Warmup.start(args);
         System.exit(run(System.out, System.err, args));
     }
