@@ -1,9 +1,8 @@
 package dev.coilwise.catalog;
 
+import dev.coilwise.requirement.UnitWords;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
-import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -71,20 +70,12 @@ public enum CatalogUnit {
     }
 
     /**
-     * Unit names written out in full, or abbreviated with a full stop, that people put where a symbol belongs. They
-     * are not accepted (requirement files do not accept them either: their reader takes symbols only); they only
-     * give the "did you mean" hint, since edit distance alone cannot tie "inches" to "in".
+     * The unit of this kind that {@code word} names in full or abbreviated with a full stop (e.g. "inches" for in), if
+     * any ({@link UnitWords}, shared with requirement files). Such words are not accepted; they only give the "did you
+     * mean" hint.
      */
-    private static final Map<String, CatalogUnit> NAMES = Map.ofEntries(Map.entry("inch", IN), Map.entry("inches", IN),
-            Map.entry("in.", IN), Map.entry("millimetre", MM), Map.entry("millimetres", MM),
-            Map.entry("millimeter", MM), Map.entry("millimeters", MM), Map.entry("metre", M), Map.entry("metres", M),
-            Map.entry("meter", M), Map.entry("meters", M), Map.entry("newton", N), Map.entry("newtons", N),
-            Map.entry("pound-force", LBF), Map.entry("pounds-force", LBF));
-
-    /** The unit of this kind that {@code word} names in full (e.g. "inches" for in), if any. */
     public static Optional<CatalogUnit> byName(String word, Kind kind) {
-        return Optional.ofNullable(NAMES.get(word.strip().toLowerCase(Locale.ROOT).replace('_', '-')))
-                .filter(u -> u.kind == kind);
+        return UnitWords.symbolFor(word).map(symbol -> bySymbol(symbol, kind));
     }
 
     /** The unit with this symbol (case-insensitive) and kind, or null. */

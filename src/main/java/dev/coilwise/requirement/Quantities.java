@@ -134,7 +134,7 @@ public final class Quantities {
             String usual = Arrays.stream(kinds).map(QuantityKind::usualUnits).collect(Collectors.joining(", "));
             List<String> candidates = Arrays.stream(kinds).flatMap(k -> k.units().stream()).toList();
             throw BadInputException.of(Message.UNKNOWN_UNIT, whole, Shown.value(unitText),
-                    Suggest.hint(unitText, candidates), nouns, usual);
+                    UnitWords.hint(unitText, candidates), nouns, usual);
         }
     }
 

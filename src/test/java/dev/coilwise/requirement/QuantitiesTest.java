@@ -97,6 +97,16 @@ class QuantitiesTest {
     }
 
     @Test
+    void aUnitWrittenInFullIsRefusedWithItsSymbolAsTheHint() {
+        assertThatThrownBy(() -> si("1.2 inch", QuantityKind.LENGTH))
+                .hasMessage("test: '1.2 inch' has an unknown unit 'inch' (did you mean 'in'?); length units: mm, cm, m, km, in, ft");
+        assertThatThrownBy(() -> si("250 Newtons", QuantityKind.FORCE)).hasMessageContaining("(did you mean 'N'?)");
+        assertThatThrownBy(() -> si("40 lbs", QuantityKind.MASS)).hasMessageContaining("(did you mean 'lb'?)");
+        // A word for a unit of another kind gives no hint from the word: "inches" is no force.
+        assertThatThrownBy(() -> si("3 inches", QuantityKind.FORCE)).message().doesNotContain("did you mean 'in'");
+    }
+
+    @Test
     void nanInfinityAndJunkAreRefused() {
         assertThatThrownBy(() -> si("NaN mm", QuantityKind.LENGTH)).hasMessage("test: 'NaN mm' is not a finite number; give a length such as '45 mm' or '1.8 in'");
         assertThatThrownBy(() -> si(".inf mm", QuantityKind.LENGTH)).hasMessage("test: '.inf mm' is not a finite number; give a length such as '45 mm' or '1.8 in'");
