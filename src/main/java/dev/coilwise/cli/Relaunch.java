@@ -15,7 +15,7 @@ import java.util.Set;
  * in so short a run) and to loading and verifying classes one by one. When coilwise is started plainly, as
  * {@code java -jar coilwise.jar size ...} with no JVM options, it therefore starts the same jar once more as a child
  * process with the settings {@code bin/coilwise} uses (the quick compiler only, the serial collector, and the
- * class-data archive the build writes beside the jar when it is there), passes it the standard streams and the
+ * class-data archive the build writes beside the jar when it is there and newer than the jar), passes it the standard streams and the
  * arguments unchanged, and exits with its exit code. The child never starts another.
  *
  * <p>Nothing else changes: the output is the same, byte for byte. A user who gives JVM options (or sets
@@ -70,6 +70,20 @@ final class Relaunch {
     }
 
     /**
+     * The archive when it was written after the jar: one left from an earlier build (the jar rebuilt with
+     * {@code -Dcds.skip=true}) would only make the JVM print a warning and start without it.
+     */
+    private static Optional<Path> current(Path archive, Path jar) {
+        try {
+            return Files.isRegularFile(archive)
+                    && Files.getLastModifiedTime(archive).compareTo(Files.getLastModifiedTime(jar)) >= 0
+                    ? Optional.of(archive) : Optional.empty();
+        } catch (IOException | SecurityException e) {
+            return Optional.empty();
+        }
+    }
+
+    /**
      * Runs the command in a child JVM when {@link #plan} says so.
      *
      * @return the child's exit code, or empty when the run should go on in this JVM
@@ -82,8 +96,7 @@ final class Relaunch {
         boolean keep = System.getenv(SAME_JVM) != null || System.getenv("JDK_JAVA_OPTIONS") != null
                 || System.getenv("JAVA_TOOL_OPTIONS") != null;
         Optional<List<String>> cmd = plan(info.command(), info.arguments().map(List::of), classPath,
-                Boolean.getBoolean(CHILD), keep, Files.isRegularFile(archive) ? Optional.of(archive) : Optional.empty(),
-                List.of(args));
+                Boolean.getBoolean(CHILD), keep, current(archive, jar), List.of(args));
         if (cmd.isEmpty()) {
             return OptionalInt.empty();
         }

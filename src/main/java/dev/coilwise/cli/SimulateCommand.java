@@ -1,6 +1,9 @@
 package dev.coilwise.cli;
 
+import dev.coilwise.dynamics.ApexBand;
 import dev.coilwise.dynamics.DynamicsFlags;
+import dev.coilwise.dynamics.LimitBreach;
+import dev.coilwise.dynamics.SimulatedLimits;
 import dev.coilwise.dynamics.SimulationOptions;
 import dev.coilwise.dynamics.SimulationResult;
 import dev.coilwise.dynamics.SimulationSummary;
@@ -17,6 +20,7 @@ import dev.coilwise.report.TimeHistoryChart;
 import dev.coilwise.report.TimeHistoryCsvWriter;
 import dev.coilwise.requirement.RequirementReader;
 import dev.coilwise.requirement.SpringFileReader;
+import dev.coilwise.scatter.ScatterSettings;
 import dev.coilwise.search.PrunedSearch;
 import dev.coilwise.search.Sizer;
 import dev.coilwise.search.SizingOptions;
@@ -135,6 +139,16 @@ final class SimulateCommand extends BaseCommand {
         DynamicsFlags.warnings(sim, e, req.job(), u.system()).forEach(f -> sb.append("  WARNING: ").append(f)
                 .append('\n'));
         DynamicsFlags.notes(sim, req.job(), u.system()).forEach(n -> sb.append("  note: ").append(n).append('\n'));
+        ScatterSettings band = ScatterSettings.defaults();
+        List<LimitBreach> breaches = SimulatedLimits.breaches(sim, e, req,
+                new ApexBand(band.heightShortfall(), band.heightOvershoot()));
+        if (breaches.isEmpty()) {
+            sb.append("\n  With the simulated figures the design meets every limit that ranking.dynamics: strict checks.\n");
+        } else {
+            sb.append("\n  With the simulated figures the design breaks ").append(breaches.size() == 1 ? "a limit"
+                    : breaches.size() + " limits").append(" (ranking.dynamics: strict would drop it):\n");
+            breaches.forEach(b -> sb.append("  LIMIT: ").append(b.words()).append('\n'));
+        }
         sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
     }

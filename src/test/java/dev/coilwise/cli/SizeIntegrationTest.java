@@ -191,6 +191,23 @@ class SizeIntegrationTest {
     }
 
     @Test
+    void simulateSaysWhetherTheSimulatedFiguresMeetTheLimits(@TempDir Path dir) throws IOException {
+        CliRunner within = CliRunner.run("simulate", "requirements/arrest-us-gate-stop.yaml");
+        assertThat(within.code()).as(within.err()).isZero();
+        assertThat(within.out()).contains("With the simulated figures the design meets every limit").doesNotContain("LIMIT:");
+
+        // The balance still admits designs under 58 lbf, but their simulated peak force exceeds it (as in the strict
+        // dynamics test above).
+        Path req = dir.resolve("tight.yaml");
+        Files.writeString(req, Files.readString(Path.of("requirements/arrest-us-gate-stop.yaml"))
+                .replace("peak_force: 300 lbf", "peak_force: 58 lbf"));
+        CliRunner tight = CliRunner.run("simulate", req.toString());
+        assertThat(tight.code()).as(tight.err()).isZero();
+        assertThat(tight.out()).contains("(ranking.dynamics: strict would drop it)")
+                .containsPattern("LIMIT: simulated peak force [0-9.]+ lbf exceeds limits\\.peak_force 58 lbf");
+    }
+
+    @Test
     void simulateRefusesARankOutsideTheShortlist() {
         CliRunner r = CliRunner.run("simulate", "requirements/launch-vertical-ball.yaml", "--design", "99");
         assertThat(r.code()).isEqualTo(2);
