@@ -104,7 +104,7 @@ final class Relaunch {
         try {
             p = new ProcessBuilder(cmd.get()).inheritIO().start();
         } catch (IOException | SecurityException | UnsupportedOperationException e) {
-            return OptionalInt.empty();
+            return OptionalInt.empty(); // no child process here: the run goes on in this JVM, only slower to start
         }
         Thread stop = new Thread(p::destroy, "coilwise-child-stop");
         Runtime.getRuntime().addShutdownHook(stop);

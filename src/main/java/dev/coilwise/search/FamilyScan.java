@@ -249,19 +249,12 @@ final class FamilyScan {
      * bisection, since it holds up to some count and fails beyond it. The caller widens the result by two steps.
      */
     private long lastBindable(double dm, long nLo, long nHi) {
-        long good = nLo - 1;
-        long bad = nHi + 1;
-        while (bad - good > 1) {
-            long mid = (good + bad) >>> 1;
-            double na = g.coils(mid);
+        return lastHolding(nLo, nHi, jn -> {
+            double na = g.coils(jn);
             double k = gd4 / (8 * dm * dm * dm * na);
-            if (PreloadWindow.bindPossible(k, f.ends().solidLength(d, f.ends().totalCoils(na)), pocket, energy, push, xi)) {
-                good = mid;
-            } else {
-                bad = mid;
-            }
-        }
-        return good;
+            return PreloadWindow.bindPossible(k, f.ends().solidLength(d, f.ends().totalCoils(na)), pocket, energy, push,
+                    xi);
+        });
     }
 
     /**
@@ -270,16 +263,26 @@ final class FamilyScan {
      * by bisection: both terms grow with Na. The caller widens the result by two steps.
      */
     private long lastFitting(double dm, long nLo, long nHi) {
-        long good = nLo - 1;
-        long bad = nHi + 1;
-        while (bad - good > 1) {
-            long mid = (good + bad) >>> 1;
-            double na = g.coils(mid);
+        return lastHolding(nLo, nHi, jn -> {
+            double na = g.coils(jn);
             double k = gd4 / (8 * dm * dm * dm * na);
             double x = arrest != null ? ArrestBalance.maxCompression(k, arrest.mass(), arrest.contactSpeed(), push, 0)
                     : LaunchBalance.cockedCompression(k, launch.height(), launch.mass(), 0, launch.angle(),
                             launch.efficiency());
-            if (f.ends().solidLength(d, f.ends().totalCoils(na)) + (1 + xi) * x <= maxFree * (1 + TIE_SLACK)) {
+            return f.ends().solidLength(d, f.ends().totalCoils(na)) + (1 + xi) * x <= maxFree * (1 + TIE_SLACK);
+        });
+    }
+
+    /**
+     * The largest index in [lo, hi] at which {@code holds} is true (lo − 1 when none), for a test that holds up to some
+     * index and fails beyond it, by bisection.
+     */
+    private static long lastHolding(long lo, long hi, java.util.function.LongPredicate holds) {
+        long good = lo - 1;
+        long bad = hi + 1;
+        while (bad - good > 1) {
+            long mid = (good + bad) >>> 1;
+            if (holds.test(mid)) {
                 good = mid;
             } else {
                 bad = mid;
